@@ -1,0 +1,3 @@
+export default function Loading() {
+  return <p className="py-8 text-ink-soft" role="status">Loading…</p>;
+}

@@ -1,0 +1,61 @@
+import { db } from '@/db';
+import { listTeamMembers } from '@/db/queries/members';
+import { InviteForm } from '@/components/team/invite-form';
+import { MemberRowActions } from '@/components/team/member-row-actions';
+import { requirePageMember } from '@/lib/auth/current';
+import { listOpenInvitations } from '@/lib/team/invitations';
+import { changeRoleAction, removeMemberAction } from './actions';
+
+export const metadata = { title: 'Team' };
+
+export default async function TeamPage() {
+  const member = await requirePageMember();
+  const isOwner = member.role === 'owner';
+  const members = listTeamMembers(db(), member.team.id);
+  const invites = isOwner ? listOpenInvitations(db(), member.team.id) : [];
+  return (
+    <section className="space-y-6">
+      <div>
+        <h1 className="text-2xl font-semibold">Team</h1>
+        <p className="mt-1 text-ink-soft">{member.team.name}: owners manage the team, leads sign off pours, makers pour and log, viewers read.</p>
+      </div>
+      <div className="overflow-x-auto rounded-lg border border-panel-line bg-white">
+        <table className="w-full text-left text-sm" aria-label="Members">
+          <thead className="bg-panel-deep">
+            <tr><th className="p-3">Name</th><th className="p-3">E-mail</th><th className="p-3">Role</th>{isOwner ? <th className="p-3">Manage</th> : null}</tr>
+          </thead>
+          <tbody>
+            {members.map((m) => (
+              <tr key={m.userId} className="border-t border-panel-line">
+                <td className="p-3 font-medium">{m.name}{m.userId === member.user.id ? ' (you)' : ''}</td>
+                <td className="p-3 break-all">{m.email}</td>
+                <td className="p-3">{m.role}</td>
+                {isOwner ? (
+                  <td className="p-3">
+                    {m.userId === member.user.id ? <span className="text-ink-soft">—</span> : (
+                      <MemberRowActions userId={m.userId} role={m.role} name={m.name} changeRole={changeRoleAction} remove={removeMemberAction} />
+                    )}
+                  </td>
+                ) : null}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {isOwner ? (
+        <div className="rounded-lg border border-panel-line bg-white p-4">
+          <h2 className="mb-3 text-lg font-semibold">Invite a member</h2>
+          <InviteForm />
+          {invites.length ? (
+            <div className="mt-4">
+              <h3 className="text-sm font-semibold">Waiting for an answer</h3>
+              <ul className="mt-1 text-sm text-ink-soft">
+                {invites.map((i) => <li key={i.id}>{i.email} as {i.role}, until {new Date(i.expiresAt).toISOString().slice(0, 10)}</li>)}
+              </ul>
+            </div>
+          ) : null}
+        </div>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,44 @@
+import 'server-only';
+import { cookies } from 'next/headers';
+import { redirect } from 'next/navigation';
+import { cache } from 'react';
+import { db } from '@/db';
+import { getMemberByUserId, type Member } from '@/db/queries/members';
+import type { Role } from '@/db/schema';
+import { ApiError } from '@/lib/http/api';
+import { SESSION_COOKIE } from './lucia';
+import { roleAtLeast } from './roles';
+import { validateSessionToken } from './session';
+
+export type { Member };
+
+// Reads the session cookie once per request and returns the member, or null.
+export const getCurrentMember = cache(async (): Promise<Member | null> => {
+  const jar = await cookies();
+  const token = jar.get(SESSION_COOKIE)?.value;
+  if (!token) return null;
+  const { user } = await validateSessionToken(db(), token);
+  if (!user) return null;
+  return getMemberByUserId(db(), user.id);
+});
+
+// The one gate of every route handler and server action: 401 when signed
+// out, 403 when the role is below what the action needs.
+export async function requireRole(needed: Role = 'viewer'): Promise<Member> {
+  const member = await getCurrentMember();
+  if (!member) throw new ApiError(401, 'unauthenticated', 'Sign in first');
+  if (!roleAtLeast(member.role, needed)) {
+    throw new ApiError(403, 'forbidden', `This needs the ${needed} role or above; you are ${member.role}`);
+  }
+  return member;
+}
+
+export const requireMember = () => requireRole('viewer');
+
+// For pages: signed-out visitors go to the sign-in page instead of an error.
+export async function requirePageMember(needed: Role = 'viewer'): Promise<Member> {
+  const member = await getCurrentMember();
+  if (!member) redirect('/sign-in');
+  if (!roleAtLeast(member.role, needed)) redirect('/matches');
+  return member;
+}

@@ -1,0 +1,37 @@
+import { DrizzleSQLiteAdapter } from '@lucia-auth/adapter-drizzle';
+import { Lucia, TimeSpan } from 'lucia';
+import type { DB } from '@/db/open';
+import { sessions, users } from '@/db/schema';
+
+export const SESSION_COOKIE = 'pourproof_session';
+
+export function secureCookies(): boolean {
+  const setting = process.env.SECURE_COOKIES ?? 'auto';
+  if (setting === '1') return true;
+  if (setting === '0') return false;
+  return process.env.NODE_ENV === 'production' && (process.env.APP_URL ?? '').startsWith('https:');
+}
+
+export function createLucia(database: DB, idleDays: number) {
+  const adapter = new DrizzleSQLiteAdapter(database, sessions, users);
+  return new Lucia(adapter, {
+    sessionExpiresIn: new TimeSpan(idleDays, 'd'),
+    sessionCookie: {
+      name: SESSION_COOKIE,
+      expires: true,
+      attributes: { secure: secureCookies(), sameSite: 'lax' },
+    },
+    getSessionAttributes: (attrs) => ({ absoluteExpiresAt: attrs.absoluteExpiresAt }),
+    getUserAttributes: (attrs) => ({ email: attrs.email, name: attrs.name }),
+  });
+}
+
+export type AppLucia = ReturnType<typeof createLucia>;
+
+declare module 'lucia' {
+  interface Register {
+    Lucia: AppLucia;
+    DatabaseSessionAttributes: { absoluteExpiresAt: number };
+    DatabaseUserAttributes: { email: string; name: string };
+  }
+}

@@ -1,0 +1,27 @@
+import path from 'node:path';
+
+// Starts the local stand-ins of the hosted services in this process: the
+// upload service (uploads-fake/) and the SMTP server (mail-fake/). Returns the
+// environment the app needs to talk to them.
+
+export type StandIns = { env: Record<string, string>; mailHttpUrl: string; close: () => Promise<void> };
+
+export async function startStandIns(opts: { dataDir: string; ephemeralPorts?: boolean }): Promise<StandIns> {
+  const { startMailFake } = await import('../mail-fake/server');
+  const mail = await startMailFake({
+    smtpPort: opts.ephemeralPorts ? 0 : Number(process.env.MAIL_FAKE_SMTP_PORT ?? 2525),
+    httpPort: opts.ephemeralPorts ? 0 : Number(process.env.MAIL_FAKE_HTTP_PORT ?? 3102),
+    dataDir: path.join(opts.dataDir, 'mail'),
+  });
+  const env: Record<string, string> = {
+    SMTP_URL: `smtp://127.0.0.1:${mail.smtpPort}`,
+    MAIL_FAKE_URL: mail.httpUrl,
+  };
+  return {
+    env,
+    mailHttpUrl: mail.httpUrl,
+    close: async () => {
+      await mail.close();
+    },
+  };
+}
