@@ -1,14 +1,5 @@
 import 'server-only';
-import { openDatabase, type DB } from './open';
+import { getDb } from './client';
 
-// The one database client of the app process.
-const globalForDb = globalThis as unknown as { pourproofDb?: DB };
-
-export function db(): DB {
-  if (!globalForDb.pourproofDb) {
-    globalForDb.pourproofDb = openDatabase(process.env.DATABASE_URL ?? './data/pourproof.db', { migrate: true });
-  }
-  return globalForDb.pourproofDb;
-}
-
-export type { DB };
+export const db = getDb;
+export type { DB } from './open';

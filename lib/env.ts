@@ -1,13 +1,15 @@
 import { z } from 'zod';
 
-// Settings parsed once, at start-up. Defaults are the local stand-ins.
+// Every setting, parsed once with zod; instrumentation.ts parses at start-up
+// so a bad value stops the server instead of surfacing later.
 const schema = z.object({
-  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   DATABASE_URL: z.string().min(1).default('./data/pourproof.db'),
-  APP_URL: z.string().url().optional(),
-  SMTP_URL: z.string().default('smtp://127.0.0.1:2525'),
-  MAIL_FROM: z.string().default('Pourproof <no-reply@pourproof.test>'),
-  MAIL_STANDIN: z.enum(['0', '1']).default('1'),
+  APP_URL: z.url().optional(),
+  SMTP_URL: z.string().min(1).default('smtp://127.0.0.1:2525'),
+  MAIL_FROM: z.string().min(3).default('Pourproof <no-reply@pourproof.test>'),
+  MAIL_FAKE_URL: z.url().optional(),
+  MAIL_RETRY_MS: z.coerce.number().int().min(100).default(5000),
+  POURPROOF_DEV_TOOLS: z.enum(['0', '1']).default('0'),
   SECURE_COOKIES: z.enum(['auto', '0', '1']).default('auto'),
   SESSION_IDLE_DAYS: z.coerce.number().positive().default(14),
   SESSION_ABSOLUTE_DAYS: z.coerce.number().positive().default(30),
@@ -28,4 +30,9 @@ export function env(): Env {
     cached = parsed.data;
   }
   return cached;
+}
+
+// Tests change settings between cases; the app never calls this.
+export function resetEnvForTests() {
+  cached = undefined;
 }

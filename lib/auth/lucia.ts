@@ -2,14 +2,15 @@ import { DrizzleSQLiteAdapter } from '@lucia-auth/adapter-drizzle';
 import { Lucia, TimeSpan } from 'lucia';
 import type { DB } from '@/db/open';
 import { sessions, users } from '@/db/schema';
+import { env } from '@/lib/env';
 
 export const SESSION_COOKIE = 'pourproof_session';
 
 export function secureCookies(): boolean {
-  const setting = process.env.SECURE_COOKIES ?? 'auto';
+  const { SECURE_COOKIES: setting, APP_URL } = env();
   if (setting === '1') return true;
   if (setting === '0') return false;
-  return process.env.NODE_ENV === 'production' && (process.env.APP_URL ?? '').startsWith('https:');
+  return process.env.NODE_ENV === 'production' && (APP_URL ?? '').startsWith('https:');
 }
 
 export function createLucia(database: DB, idleDays: number) {

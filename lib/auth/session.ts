@@ -1,6 +1,7 @@
 import { eq } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import { sessions } from '@/db/schema';
+import { env } from '@/lib/env';
 import { createLucia, type AppLucia } from './lucia';
 import { newToken, sha256Hex } from './tokens';
 
@@ -10,15 +11,11 @@ import { newToken, sha256Hex } from './tokens';
 
 const cache = new WeakMap<DB, AppLucia>();
 
-function days(name: string, fallback: number): number {
-  const n = Number(process.env[name]);
-  return Number.isFinite(n) && n > 0 ? n : fallback;
-}
 
 export function luciaFor(database: DB): AppLucia {
   let l = cache.get(database);
   if (!l) {
-    l = createLucia(database, days('SESSION_IDLE_DAYS', 14));
+    l = createLucia(database, env().SESSION_IDLE_DAYS);
     cache.set(database, l);
   }
   return l;
@@ -26,7 +23,7 @@ export function luciaFor(database: DB): AppLucia {
 
 export async function createUserSession(database: DB, userId: string) {
   const token = newToken();
-  const absoluteExpiresAt = Math.floor(Date.now() / 1000 + days('SESSION_ABSOLUTE_DAYS', 30) * 86400);
+  const absoluteExpiresAt = Math.floor(Date.now() / 1000 + env().SESSION_ABSOLUTE_DAYS * 86400);
   const session = await luciaFor(database).createSession(userId, { absoluteExpiresAt }, { sessionId: sha256Hex(token) });
   return { token, session };
 }

@@ -1,15 +1,15 @@
 import { and, eq, gt, inArray, lte } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import { signInFailures } from '@/db/schema';
+import { env } from '@/lib/env';
 
 // Failed sign-ins are counted per account and per client address over a
 // sliding window; at the limit every attempt for that key is refused with 429
 // until the oldest failure leaves the window.
 
 export function throttleSettings() {
-  const max = Number(process.env.SIGN_IN_MAX_FAILURES) || 10;
-  const windowMs = (Number(process.env.SIGN_IN_WINDOW_MIN) || 15) * 60_000;
-  return { max, windowMs };
+  const { SIGN_IN_MAX_FAILURES: max, SIGN_IN_WINDOW_MIN } = env();
+  return { max, windowMs: SIGN_IN_WINDOW_MIN * 60_000 };
 }
 
 export function throttleKeys(email: string, ip: string | null): string[] {

@@ -1,4 +1,5 @@
 import 'server-only';
+import { env } from '@/lib/env';
 import { ApiError } from './api';
 
 // Mutating route handlers accept only requests whose Origin is this app
@@ -13,7 +14,8 @@ export function assertSameOrigin(req: Request) {
     allowed.add(`http://${host}`);
     allowed.add(`https://${host}`);
   }
-  if (process.env.APP_URL) allowed.add(new URL(process.env.APP_URL).origin);
+  const configured = env().APP_URL;
+  if (configured) allowed.add(new URL(configured).origin);
   if (!allowed.has(origin)) throw new ApiError(403, 'bad_origin', `Requests from ${origin.slice(0, 100)} are not accepted`);
 }
 

@@ -1,10 +1,11 @@
 import nodemailer, { type Transporter } from 'nodemailer';
+import { env } from '@/lib/env';
 
 let transport: Transporter | undefined;
 let transportUrl: string | undefined;
 
 export function smtpUrl(): string {
-  return process.env.SMTP_URL || 'smtp://127.0.0.1:2525';
+  return env().SMTP_URL;
 }
 
 export function getTransport(): Transporter {
@@ -17,5 +18,5 @@ export function getTransport(): Transporter {
 }
 
 export function mailFrom(): string {
-  return process.env.MAIL_FROM || 'Pourproof <no-reply@pourproof.test>';
+  return env().MAIL_FROM;
 }

@@ -53,6 +53,8 @@ export default async function setup(project: TestProject) {
     return () => fs.rmSync(tmp, { recursive: true, force: true });
   }
   standIns = await startStandIns({ dataDir: path.join(tmp, 'standins'), ephemeralPorts: true });
+  // Test workers that call lib/ functions directly send through the same stand-ins.
+  Object.assign(process.env, standIns.env);
   const dbFile = path.join(tmp, 'app.db');
   const database = openDatabase(dbFile, { migrate: true });
   await seedDemo(database);

@@ -1,7 +1,7 @@
 import path from 'node:path';
 import { defineConfig } from 'vitest/config';
 
-const root = path.resolve(__dirname);
+const root = import.meta.dirname;
 
 export default defineConfig({
   resolve: {

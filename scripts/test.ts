@@ -1,0 +1,25 @@
+import path from 'node:path';
+import { run } from './run';
+
+// The whole suite: type check, a production build of the app for the
+// integration and browser tests, then vitest (unit, integration, browser).
+const root = path.resolve(__dirname, '..');
+const bin = (name: string) => path.join(root, 'node_modules', '.bin', name);
+
+async function main() {
+  const started = Date.now();
+  const step = async (label: string, cmd: string, args: string[], env: Record<string, string> = {}) => {
+    console.log(`\n== ${label}`);
+    const code = await run(cmd, args, env);
+    if (code !== 0) {
+      console.error(`\n${label} failed (exit ${code})`);
+      process.exit(code);
+    }
+  };
+  await step('type check', bin('tsc'), ['--noEmit', '-p', root]);
+  await step('build (for the integration and browser tests)', bin('next'), ['build'], { NEXT_DIST_DIR: '.next-test' });
+  await step('tests', bin('vitest'), ['run', ...process.argv.slice(2)]);
+  console.log(`\nall done in ${Math.round((Date.now() - started) / 1000)} s`);
+}
+
+main();
