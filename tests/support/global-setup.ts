@@ -52,7 +52,7 @@ export default async function setup(project: TestProject) {
     project.provide('baseUrl', '');
     return () => fs.rmSync(tmp, { recursive: true, force: true });
   }
-  standIns = await startStandIns({ dataDir: path.join(tmp, 'standins'), ephemeralPorts: true });
+  standIns = await startStandIns({ dataDir: path.join(tmp, 'standins'), ephemeralPorts: true, quiet: process.env.STANDIN_LOGS !== '1' });
   // Test workers that call lib/ functions directly send through the same stand-ins.
   Object.assign(process.env, standIns.env);
   const dbFile = path.join(tmp, 'app.db');
