@@ -15,6 +15,13 @@ const schema = z.object({
   SESSION_ABSOLUTE_DAYS: z.coerce.number().positive().default(30),
   SIGN_IN_MAX_FAILURES: z.coerce.number().int().positive().default(10),
   SIGN_IN_WINDOW_MIN: z.coerce.number().positive().default(15),
+  // The upload service (UploadThing SDK). The SDK reads these itself; they are
+  // listed here so a malformed value stops the server at start-up.
+  UPLOADTHING_TOKEN: z.string().min(1).optional(),
+  UPLOADTHING_INGEST_URL: z.url().optional(),
+  UPLOADTHING_API_URL: z.url().optional(),
+  UPLOADTHING_UFS_HOST: z.string().min(1).optional(),
+  UPLOADTHING_UFS_APP_ID_LOCATION: z.enum(['subdomain', 'path']).optional(),
 });
 
 export type Env = z.infer<typeof schema>;

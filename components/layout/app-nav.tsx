@@ -7,6 +7,7 @@ import { Wordmark } from './wordmark';
 
 const LINKS = [
   { href: '/matches', label: 'Matches' },
+  { href: '/photos', label: 'Photos' },
   { href: '/colorants', label: 'Colorants' },
   { href: '/molds', label: 'Molds' },
   { href: '/batches', label: 'Batches' },
@@ -14,7 +15,7 @@ const LINKS = [
   { href: '/calculator', label: 'Calculator' },
 ];
 
-export function AppNav({ member }: { member: { name: string; role: string; team: string } }) {
+export function AppNav({ member, devTools = false }: { member: { name: string; role: string; team: string }; devTools?: boolean }) {
   const pathname = usePathname();
   const router = useRouter();
   const [busy, setBusy] = useState(false);
@@ -29,7 +30,7 @@ export function AppNav({ member }: { member: { name: string; role: string; team:
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">
         <Link href="/matches" aria-label="Pourproof home"><Wordmark /></Link>
         <nav aria-label="Main" className="order-3 -mx-1 flex w-full gap-1 overflow-x-auto sm:order-none sm:w-auto">
-          {LINKS.map((l) => {
+          {(devTools ? [...LINKS, { href: '/dev/mailbox', label: 'Mailbox' }] : LINKS).map((l) => {
             const active = pathname === l.href || pathname.startsWith(`${l.href}/`);
             return (
               <Link

@@ -1,9 +1,10 @@
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
+import { labToHex } from '../../lib/color';
 import type { DB } from '../open';
 import { matches, pours, samples, users, zones } from '../schema';
 
 export type LabValue = { l: number; a: number; b: number };
-export type TargetZone = { name: string; lab: LabValue; hex: string | null; spread: number | null };
+export type TargetZone = { name: string; lab: LabValue; hex: string; spread: number | null };
 export type PourSummary = {
   id: string;
   number: number;
@@ -68,7 +69,7 @@ export function listMatches(database: DB, teamId: string, ids?: string[]): Match
             zones: zs.map((z) => ({
               name: z.name,
               lab: { l: z.targetL!, a: z.targetA!, b: z.targetB! },
-              hex: null,
+              hex: labToHex({ l: z.targetL!, a: z.targetA!, b: z.targetB! }),
               spread: z.targetSpread,
             })),
           }

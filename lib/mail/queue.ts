@@ -17,7 +17,7 @@ export function queueMail(database: DB, msg: MailMessage): string {
     .insert(outgoingMail)
     .values({ id, teamId: msg.teamId, to: msg.to, subject: msg.subject, text: msg.text, html: msg.html ?? null, nextAttemptAt: Date.now() })
     .run();
-  void deliverOne(database, id);
+  deliverOne(database, id).catch((err) => console.warn('[mail] send attempt failed', err));
   return id;
 }
 

@@ -1,5 +1,6 @@
 import { describe, expect, inject, it } from 'vitest';
 import { api, expectErrorShape, signInAs, signUpShop, uniqueEmail } from '../support/http';
+import { waitForMail } from '../support/mail';
 
 describe('roles and team scoping', () => {
   it('lets only the owner invite: lead, maker and viewer get 403, no session 401', async () => {
@@ -40,29 +41,26 @@ describe('roles and team scoping', () => {
   });
 
   it('ends a member\'s sessions when the owner changes their role', async () => {
-    // The owner invites, the invitee accepts (through the library on the same
-    // database file), signs in, and loses the session on a role change.
+    // The owner invites; the link arrives in the SMTP stand-in; the invitee
+    // joins through the acceptance library on the same database file, signs
+    // in, and loses that session when the owner changes the role.
     const { acceptInvitation } = await import('../../lib/team/invitations');
     const { changeRole } = await import('../../lib/team/members');
     const { openDatabase } = await import('../../db/open');
+    const owner = await signUpShop('Role shop');
+    const email = uniqueEmail('member');
+    expect((await api('/api/team/invitations', { body: { email, role: 'maker' }, cookie: owner.cookie })).status).toBe(201);
+    const mail = await waitForMail(email, /invited/);
+    const token = mail.text.match(/\/invite\/([0-9a-f]{40})/)![1]!;
     const database = openDatabase(inject('dbFile'));
     try {
-      const owner = await signUpShop('Role shop');
-      const email = uniqueEmail('member');
-      const inv = await api('/api/team/invitations', { body: { email, role: 'maker' }, cookie: owner.cookie });
-      expect(inv.status).toBe(201);
-      // The token of that invitation travels only by e-mail; a second one made
-      // through the same library function gives the test a token to accept.
-      const { createInvitation } = await import('../../lib/team/invitations');
-      const me = (await api('/api/me', { cookie: owner.cookie })).body;
-      const second = await createInvitation(database, me, { email: uniqueEmail('member2'), role: 'maker' }, 'http://x');
-      const token = second.link.split('/').pop()!;
       const accepted = await acceptInvitation(database, token, { name: 'New Maker', password: 'maker password 1' });
-      const cookie = await signInAs(accepted.email, 'maker password 1', '10.40.0.3');
+      const cookie = await signInAs(email, 'maker password 1', '10.40.0.3');
       expect((await api('/api/me', { cookie })).body.role).toBe('maker');
+      const me = (await api('/api/me', { cookie: owner.cookie })).body;
       changeRole(database, me, accepted.userId, 'viewer');
       expect((await api('/api/me', { cookie })).status).toBe(401);
-      const again = await signInAs(accepted.email, 'maker password 1', '10.40.0.3');
+      const again = await signInAs(email, 'maker password 1', '10.40.0.3');
       expect((await api('/api/me', { cookie: again })).body.role).toBe('viewer');
     } finally {
       database.$client.close();

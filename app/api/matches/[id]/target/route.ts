@@ -1,0 +1,16 @@
+import { db } from '@/db';
+import { getMatch } from '@/db/queries/matches';
+import { requireRole } from '@/lib/auth/current';
+import { json, readJson, withApi } from '@/lib/http/api';
+import { assertSameOrigin } from '@/lib/http/origin';
+import { setTarget } from '@/lib/matches/setTarget';
+import { targetSchema } from '@/lib/validations/match';
+
+export const POST = withApi<{ id: string }>(async (req, { params }) => {
+  assertSameOrigin(req);
+  const member = await requireRole('maker');
+  const { id } = await params;
+  const input = await readJson(req, targetSchema);
+  await setTarget(db(), member, id, input);
+  return json(getMatch(db(), member.team.id, id));
+});

@@ -1,0 +1,73 @@
+import { and, asc, eq } from 'drizzle-orm';
+import { bandFor, describeDifference, labToHex } from '../../lib/color';
+import type { DB } from '../open';
+import { colorants, molds, pours, recipeLines, samples, users, zones } from '../schema';
+
+// A pour in the API's Pour shape: measured colour and ΔE00 per zone against
+// the target, with the direction in words, and its recipe per cup.
+export function getPour(database: DB, teamId: string, pourId: string) {
+  const row = database
+    .select({ p: pours, by: users.name, mold: molds.name })
+    .from(pours)
+    .leftJoin(users, eq(users.id, pours.createdBy))
+    .leftJoin(molds, eq(molds.id, pours.moldId))
+    .where(and(eq(pours.id, pourId), eq(pours.teamId, teamId)))
+    .get();
+  if (!row) return null;
+  const { p } = row;
+  const targets = database.select().from(zones).where(eq(zones.matchId, p.matchId)).orderBy(asc(zones.position)).all();
+  const zoneSamples = database.select().from(samples).where(and(eq(samples.pourId, p.id), eq(samples.purpose, 'pour'))).all();
+  const recipe = database
+    .select({ zone: recipeLines.zone, colorantId: recipeLines.colorantId, colorant: colorants.name, kind: colorants.kind, amount: recipeLines.amount, unit: recipeLines.unit })
+    .from(recipeLines)
+    .innerJoin(colorants, eq(colorants.id, recipeLines.colorantId))
+    .where(eq(recipeLines.pourId, p.id))
+    .orderBy(asc(recipeLines.position))
+    .all();
+  return {
+    id: p.id,
+    matchId: p.matchId,
+    number: p.number,
+    status: p.status,
+    photoId: p.photoId,
+    moldId: p.moldId,
+    mold: row.mold,
+    batchCups: p.batchCups,
+    tempF: p.tempF,
+    notes: p.notes,
+    correctsPourId: p.correctsPourId,
+    createdBy: row.by,
+    createdAt: p.createdAt,
+    submittedAt: p.submittedAt,
+    zones: targets
+      .map((t) => {
+        const s = zoneSamples.find((x) => x.zone === t.name);
+        if (!s) return null;
+        const target = { l: t.targetL ?? s.l, a: t.targetA ?? s.a, b: t.targetB ?? s.b };
+        const lab = { l: s.l, a: s.a, b: s.b };
+        return {
+          name: s.zone,
+          lab,
+          hex: s.hex,
+          target: { lab: target, hex: labToHex(target) },
+          dE00: s.dE00!,
+          dL: s.dL!,
+          dC: s.dC!,
+          dH: s.dH!,
+          band: bandFor(s.dE00!),
+          direction: describeDifference(target, lab),
+          shape: s.shape,
+          pixels: s.pixels,
+          kept: s.kept,
+          spread: s.spread,
+          glare: s.glare,
+          flake: s.flake,
+          whiteBalance: s.whiteBalance,
+        };
+      })
+      .filter((z) => z !== null),
+    recipe,
+  };
+}
+
+export type PourView = NonNullable<ReturnType<typeof getPour>>;

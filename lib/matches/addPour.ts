@@ -1,0 +1,71 @@
+import { and, eq, inArray, max } from 'drizzle-orm';
+import type { DB } from '@/db/open';
+import type { Member } from '@/db/queries/members';
+import { colorants, matches, molds, pours, recipeLines, samples } from '@/db/schema';
+import { compareLab } from '@/lib/color';
+import { recordAudit } from '@/lib/audit';
+import { newId } from '@/lib/auth/tokens';
+import { ApiError } from '@/lib/http/api';
+import type { PourInput } from '@/lib/validations/match';
+import { assertZonesOfMatch, loadMatch } from './loadMatch';
+import { measureZones } from './measureZones';
+
+// Measures a test pour's photo and stores it as the match's next numbered
+// pour, with its recipe and ΔE00 per zone against the target. A pour is never
+// edited afterwards; a correction is a new pour that names the one it replaces.
+export async function addPour(database: DB, member: Member, matchId: string, input: PourInput): Promise<string> {
+  const teamId = member.team.id;
+  const { match, zones: zoneRows } = loadMatch(database, teamId, matchId);
+  if (match.status === 'archived') throw new ApiError(409, 'archived', 'This match is archived; reopen it before pouring again');
+  if (zoneRows.length === 0 || zoneRows.some((z) => z.targetL === null)) {
+    throw new ApiError(409, 'no_target', 'This match has no target yet: sample every zone on a reference photo first');
+  }
+  assertZonesOfMatch(input.zones.map((z) => z.name), zoneRows);
+  const zoneNames = new Set(zoneRows.map((z) => z.name));
+  input.recipe.forEach((l, i) => {
+    if (!zoneNames.has(l.zone)) throw new ApiError(400, 'invalid_body', `recipe[${i}].zone: "${l.zone}" is not a zone of this match`);
+  });
+  const colorantIds = [...new Set(input.recipe.map((l) => l.colorantId))];
+  const known = new Set(
+    colorantIds.length
+      ? database.select({ id: colorants.id }).from(colorants).where(and(eq(colorants.teamId, teamId), inArray(colorants.id, colorantIds))).all().map((c) => c.id)
+      : [],
+  );
+  input.recipe.forEach((l, i) => {
+    if (!known.has(l.colorantId)) throw new ApiError(400, 'invalid_body', `recipe[${i}].colorantId: no such colorant in your library`);
+  });
+  if (input.moldId && !database.select({ id: molds.id }).from(molds).where(and(eq(molds.id, input.moldId), eq(molds.teamId, teamId))).get()) {
+    throw new ApiError(400, 'invalid_body', 'moldId: no such mold in your library');
+  }
+  if (input.correctsPourId && !database.select({ id: pours.id }).from(pours).where(and(eq(pours.id, input.correctsPourId), eq(pours.matchId, matchId))).get()) {
+    throw new ApiError(400, 'invalid_body', 'correctsPourId: no such pour in this match');
+  }
+  const measured = await measureZones(database, teamId, input.photoId, input.zones, input.neutral);
+  const id = newId();
+  database.transaction((tx) => {
+    const last = tx.select({ n: max(pours.number) }).from(pours).where(eq(pours.matchId, matchId)).get();
+    const number = (last?.n ?? 0) + 1;
+    tx.insert(pours)
+      .values({
+        id, teamId, matchId, number, photoId: input.photoId, moldId: input.moldId ?? null, batchCups: input.batchCups ?? null,
+        tempF: input.tempF ?? null, notes: input.notes ?? null, correctsPourId: input.correctsPourId ?? null, createdBy: member.user.id,
+      })
+      .run();
+    input.recipe.forEach((l, position) => tx.insert(recipeLines).values({ id: newId(), pourId: id, position, ...l }).run());
+    measured.regions.forEach((r, i) => {
+      const z = zoneRows.find((zr) => zr.name === r.name)!;
+      const cmp = compareLab({ l: z.targetL!, a: z.targetA!, b: z.targetB! }, r.lab, match.tolerance);
+      tx.insert(samples)
+        .values({
+          id: newId(), teamId, photoId: input.photoId, purpose: 'pour', matchId, pourId: id, zone: r.name,
+          shape: input.zones[i]!.shape, neutral: input.neutral ?? null, l: r.lab.l, a: r.lab.a, b: r.lab.b, hex: r.hex,
+          pixels: r.pixels, kept: r.kept, spread: r.spread, glare: r.glare, flake: r.flake, whiteBalance: measured.whiteBalance,
+          dE00: cmp.dE00, dL: cmp.dL, dC: cmp.dC, dH: cmp.dH,
+        })
+        .run();
+    });
+    tx.update(matches).set({ updatedAt: Date.now() }).where(eq(matches.id, matchId)).run();
+    recordAudit(tx, { teamId, actorId: member.user.id, action: 'pour.created', entity: 'pour', entityId: id, data: { matchId, number } });
+  });
+  return id;
+}

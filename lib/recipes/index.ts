@@ -1,0 +1,3 @@
+export * from './units';
+export { scaleRecipe, type RecipeLineInput, type ScaledLine } from './scaleRecipe';
+export { moldYield, type MoldForYield } from './moldYield';

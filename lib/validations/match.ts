@@ -1,0 +1,74 @@
+import { z } from 'zod';
+import { DOSE_UNITS } from '@/db/schema';
+import { shapeSchema } from '@/lib/color/shapeSchema';
+
+export const zoneName = z
+  .string({ error: 'a zone name must be text' })
+  .trim()
+  .toLowerCase()
+  .min(1, 'a zone name cannot be empty')
+  .max(40, 'a zone name must be at most 40 characters')
+  .regex(/^[a-z0-9][a-z0-9 _-]*$/, 'a zone name uses letters, digits, spaces, - or _');
+
+export const toleranceField = z
+  .number({ error: 'tolerance must be a number (ΔE00)' })
+  .gt(0, 'tolerance must be more than 0')
+  .max(20, 'tolerance must be at most 20 ΔE00');
+
+export const createMatchSchema = z.object({
+  name: z.string({ error: 'name is required' }).trim().min(1, 'name is required').max(120, 'name must be at most 120 characters'),
+  zones: z
+    .array(zoneName, { error: 'zones must be a list of names' })
+    .min(1, 'a match needs at least one zone')
+    .max(12, 'a match has at most 12 zones')
+    .refine((zs) => new Set(zs).size === zs.length, 'zone names must be different'),
+  tolerance: toleranceField.optional(),
+  notes: z.string().max(4000, 'notes must be at most 4000 characters').optional().nullable(),
+});
+
+export type CreateMatchInput = z.infer<typeof createMatchSchema>;
+
+export const idField = z.string({ error: 'must be an id' }).min(1, 'must be an id').max(64, 'is not a valid id');
+
+export const zoneRegionSchema = z.object({ name: zoneName, shape: shapeSchema });
+
+export const neutralSchema = z.object({
+  shape: shapeSchema,
+  L: z.number({ error: 'L must be a number' }).gt(0, 'L must be > 0').max(100, 'L must be ≤ 100').optional(),
+});
+
+const zoneRegions = z
+  .array(zoneRegionSchema, { error: 'zones must be a list of { name, shape }' })
+  .min(1, 'mark at least one zone')
+  .max(16, 'at most 16 zones')
+  .refine((zs) => new Set(zs.map((z) => z.name)).size === zs.length, 'each zone may be marked once');
+
+export const targetSchema = z.object({ photoId: idField, zones: zoneRegions, neutral: neutralSchema.optional() });
+
+// Doses are per cup of plastisol. The ceilings are sanity limits against
+// typing slips (a dose of 5000 drops per cup is not a recipe).
+const MAX_PER_CUP: Record<(typeof DOSE_UNITS)[number], number> = { drops: 500, tsp: 48, g: 500, ml: 236.6 };
+
+export const recipeLineSchema = z
+  .object({
+    zone: zoneName,
+    colorantId: idField,
+    amount: z.number({ error: 'amount must be a number' }).gt(0, 'amount must be more than 0'),
+    unit: z.enum(DOSE_UNITS, { error: `unit must be one of ${DOSE_UNITS.join(', ')}` }),
+  })
+  .refine((l) => l.amount <= MAX_PER_CUP[l.unit], { message: 'amount is more than a cup of plastisol could take', path: ['amount'] });
+
+export const pourSchema = z.object({
+  photoId: idField,
+  recipe: z.array(recipeLineSchema, { error: 'recipe must be a list' }).max(60, 'at most 60 recipe lines'),
+  moldId: idField.optional().nullable(),
+  batchCups: z.number({ error: 'batchCups must be a number' }).gt(0, 'batchCups must be more than 0').max(400, 'batchCups must be at most 400').optional().nullable(),
+  tempF: z.number({ error: 'tempF must be a number' }).min(32, 'tempF must be at least 32 °F').max(500, 'tempF must be at most 500 °F').optional().nullable(),
+  notes: z.string().max(4000, 'notes must be at most 4000 characters').optional().nullable(),
+  correctsPourId: idField.optional().nullable(),
+  zones: zoneRegions,
+  neutral: neutralSchema.optional(),
+});
+
+export type TargetInput = z.infer<typeof targetSchema>;
+export type PourInput = z.infer<typeof pourSchema>;
