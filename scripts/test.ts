@@ -17,7 +17,7 @@ async function main() {
     }
   };
   await step('type check', bin('tsc'), ['--noEmit', '-p', root]);
-  await step('build (for the integration and browser tests)', bin('next'), ['build'], { NEXT_DIST_DIR: '.next-test' });
+  await step('build (for the integration and browser tests)', bin('next'), ['build'], { NEXT_DIST_DIR: process.env.POURPROOF_TEST_DIST ?? '.next-test' });
   await step('tests', bin('vitest'), ['run', ...process.argv.slice(2)]);
   console.log(`\nall done in ${Math.round((Date.now() - started) / 1000)} s`);
 }

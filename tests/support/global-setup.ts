@@ -12,7 +12,8 @@ import { startStandIns, type StandIns } from '../../scripts/standins';
 // production build of the app (`next start`) on a fresh, migrated, demo-seeded
 // SQLite file. Integration and browser tests talk to it over HTTP.
 
-export const TEST_DIST_DIR = '.next-test';
+// POURPROOF_TEST_DIST lets two checkouts' runs build side by side.
+export const TEST_DIST_DIR = process.env.POURPROOF_TEST_DIST ?? '.next-test';
 
 async function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {

@@ -1,5 +1,5 @@
 import { db } from '@/db';
-import { getMatch } from '@/db/queries/matches';
+import { getMatchDetail } from '@/db/queries/matchDetail';
 import { requireRole } from '@/lib/auth/current';
 import { json, readJson, withApi } from '@/lib/http/api';
 import { assertSameOrigin } from '@/lib/http/origin';
@@ -12,5 +12,5 @@ export const POST = withApi<{ id: string }>(async (req, { params }) => {
   const { id } = await params;
   const input = await readJson(req, targetSchema);
   await setTarget(db(), member, id, input);
-  return json(getMatch(db(), member.team.id, id));
+  return json(getMatchDetail(db(), member.team.id, id));
 });

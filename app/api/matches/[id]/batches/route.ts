@@ -1,0 +1,27 @@
+import { db } from '@/db';
+import { getBatch, listBatches } from '@/db/queries/batches';
+import { appUrl } from '@/lib/appUrl';
+import { requireMember, requireRole } from '@/lib/auth/current';
+import { logBatch } from '@/lib/batches/logBatch';
+import { json, readJson, withApi } from '@/lib/http/api';
+import { assertSameOrigin } from '@/lib/http/origin';
+import { loadMatch } from '@/lib/matches/loadMatch';
+import { batchSchema } from '@/lib/validations/production';
+
+// GET: the match's batches, oldest first (a run chart's order).
+export const GET = withApi<{ id: string }>(async (_req, { params }) => {
+  const member = await requireMember();
+  const { id } = await params;
+  loadMatch(db(), member.team.id, id);
+  return json(listBatches(db(), member.team.id, id));
+});
+
+// POST: logs a production batch against the match's standard → 201 Batch.
+export const POST = withApi<{ id: string }>(async (req, { params }) => {
+  assertSameOrigin(req);
+  const member = await requireRole('maker');
+  const { id } = await params;
+  const input = await readJson(req, batchSchema);
+  const batchId = await logBatch(db(), member, id, input, appUrl(req));
+  return json(getBatch(db(), member.team.id, batchId), 201);
+});

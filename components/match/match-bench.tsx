@@ -1,0 +1,83 @@
+'use client';
+
+import { useRouter, useSearchParams } from 'next/navigation';
+import { useState } from 'react';
+import useSWR from 'swr';
+import { Button } from '@/components/ui/button';
+import type { MatchDetail } from '@/db/queries/matchDetail';
+import type { Shape } from '@/lib/color/types';
+import { swrFetcher } from '@/lib/http/client';
+import { DeltaChart } from './delta-chart';
+import { PourCompare } from './pour-compare';
+import { PourForm } from './pour-form';
+import { PourList } from './pour-list';
+import { StatusBadge } from './status-badge';
+import { TargetSampling } from './target-panel';
+import { TargetSwatches } from './target-swatches';
+
+export function MatchBench({ matchId, canPour }: { matchId: string; canPour: boolean }) {
+  const key = `/api/matches/${matchId}`;
+  const { data: match, error, mutate } = useSWR<MatchDetail>(key, swrFetcher);
+  const params = useSearchParams();
+  const router = useRouter();
+  const [mode, setMode] = useState<'compare' | 'pour' | 'reference'>('compare');
+  if (error) return <p role="alert" className="text-band-off">Could not load this match: {(error as Error).message}</p>;
+  if (!match) return <p role="status" className="text-ink-soft">Loading match…</p>;
+
+  const latest = match.pours[match.pours.length - 1];
+  const selectedId = params.get('pour') ?? latest?.id ?? null;
+  const selectedIndex = match.pours.findIndex((p) => p.id === selectedId);
+  const previousId = selectedIndex > 0 ? match.pours[selectedIndex - 1]!.id : null;
+  const editable = canPour && match.status === 'open';
+  const lastShapes = (): Record<string, Shape> => Object.fromEntries((match.target?.photos[0]?.zones ?? []).map((z) => [z.name, z.shape]));
+  const select = (id: string) => {
+    setMode('compare');
+    router.replace(`/matches/${matchId}?pour=${id}`, { scroll: false });
+  };
+
+  return (
+    <div className="space-y-6">
+      <header>
+        <div className="flex flex-wrap items-center gap-3">
+          <h1 className="text-2xl font-semibold">{match.name}</h1>
+          <StatusBadge status={match.status} />
+        </div>
+        <p className="mt-1 text-ink-soft">
+          Zones: {match.zones.join(', ')} · tolerance {match.tolerance.toFixed(1)} ΔE00{match.notes ? ` · ${match.notes}` : ''}
+        </p>
+      </header>
+
+      <section aria-labelledby="target-h" className="space-y-3">
+        <h2 id="target-h" className="text-lg font-semibold">Target</h2>
+        {match.target ? <TargetSwatches target={match.target} photoCount={match.target.photos.length} /> : <p className="text-ink-soft">No target yet: sample every zone on a reference photo.</p>}
+        {editable && (!match.target || mode === 'reference') ? (
+          <TargetSampling match={match} onSaved={() => { setMode('compare'); void mutate(); }} />
+        ) : null}
+        {editable && match.target && mode !== 'reference' ? (
+          <Button variant="secondary" onClick={() => setMode('reference')}>Add another reference photo</Button>
+        ) : null}
+      </section>
+
+      {match.target ? (
+        <section aria-labelledby="pours-h" className="space-y-3">
+          <div className="flex flex-wrap items-center justify-between gap-2">
+            <h2 id="pours-h" className="text-lg font-semibold">Pours</h2>
+            {canPour && match.status !== 'archived' && mode !== 'pour' ? <Button onClick={() => setMode('pour')}>New pour</Button> : null}
+          </div>
+          <PourList pours={match.pours} selectedId={selectedId} onSelect={select} />
+          <DeltaChart match={match} />
+          {mode === 'pour' ? (
+            <div className="rounded-lg border border-panel-line bg-white p-4">
+              <div className="mb-3 flex items-center justify-between">
+                <h3 className="text-lg font-semibold">Pour #{(latest?.number ?? 0) + 1}</h3>
+                <Button variant="secondary" onClick={() => setMode('compare')}>Cancel</Button>
+              </div>
+              <PourForm match={match} initialShapes={lastShapes()} onSaved={(id) => { void mutate(); select(id); }} />
+            </div>
+          ) : null}
+          {mode === 'compare' && selectedId && match.target ? <PourCompare key={selectedId} pourId={selectedId} previousId={previousId} target={match.target} /> : null}
+        </section>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,130 @@
+'use client';
+
+import {
+  type ColumnDef,
+  type SortingState,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getSortedRowModel,
+  useReactTable,
+} from '@tanstack/react-table';
+import Link from 'next/link';
+import { useMemo, useState } from 'react';
+import { BandBadge } from '@/components/color/band-badge';
+import { inputClass } from '@/components/ui/field';
+import type { MatchView } from '@/db/queries/matches';
+import { MATCH_STATUSES } from '@/db/schema';
+import { bandFor } from '@/lib/color/bandFor';
+import { StatusBadge } from './status-badge';
+
+const SORT_ARIA = { asc: 'ascending', desc: 'descending' } as const;
+const SORT_MARK = { asc: '▴', desc: '▾' } as const;
+
+const latestPour = (m: MatchView) => m.pours[m.pours.length - 1];
+const worstDelta = (m: MatchView) => {
+  const zs = latestPour(m)?.zones.filter((z) => z.dE00 !== null) ?? [];
+  return zs.length ? Math.max(...zs.map((z) => z.dE00!)) : Number.POSITIVE_INFINITY;
+};
+
+const columns: ColumnDef<MatchView>[] = [
+  {
+    accessorKey: 'name',
+    header: 'Match',
+    cell: ({ row }) => <Link href={`/matches/${row.original.id}`} className="font-medium text-accent underline-offset-2 hover:underline">{row.original.name}</Link>,
+  },
+  { accessorKey: 'status', header: 'Status', cell: ({ getValue }) => <StatusBadge status={getValue<string>()} />, filterFn: 'equalsString' },
+  { id: 'zones', header: 'Zones', accessorFn: (m) => m.zones.join(', '), enableSorting: false },
+  { id: 'pours', header: 'Pours', accessorFn: (m) => m.pours.length, meta: { num: true } },
+  {
+    id: 'latest',
+    header: 'Latest ΔE00 per zone',
+    accessorFn: worstDelta,
+    cell: ({ row }) => {
+      const pour = latestPour(row.original);
+      if (!pour) return <span className="text-ink-soft">no pours yet</span>;
+      return (
+        <ul className="space-y-0.5">
+          {pour.zones.map((z) => (
+            <li key={z.name} className="flex flex-wrap items-baseline gap-x-2">
+              <span className="w-12 text-ink-soft">{z.name}</span>
+              <span className="num w-8 text-right font-semibold">{z.dE00 === null ? '—' : z.dE00.toFixed(1)}</span>
+              {z.dE00 === null ? null : <BandBadge band={bandFor(z.dE00)} className="text-xs" />}
+            </li>
+          ))}
+        </ul>
+      );
+    },
+  },
+  { id: 'activity', header: 'Last activity', accessorFn: (m) => m.updatedAt, cell: ({ getValue }) => new Date(getValue<number>()).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' }) },
+  { id: 'maker', header: 'Started by', accessorFn: (m) => m.createdBy ?? '—' },
+];
+
+export function MatchesTable({ data }: { data: MatchView[] }) {
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'activity', desc: true }]);
+  const [search, setSearch] = useState('');
+  const [status, setStatus] = useState('');
+  const columnFilters = useMemo(() => (status ? [{ id: 'status', value: status }] : []), [status]);
+  const table = useReactTable({
+    data,
+    columns,
+    state: { sorting, globalFilter: search, columnFilters },
+    onSortingChange: setSorting,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+    globalFilterFn: (row, _id, value: string) => row.original.name.toLowerCase().includes(value.toLowerCase()) || (row.original.notes ?? '').toLowerCase().includes(value.toLowerCase()),
+  });
+  return (
+    <div>
+      <div className="mb-3 flex flex-wrap gap-3">
+        <label className="min-w-48 flex-1">
+          <span className="sr-only">Search matches</span>
+          <input type="search" placeholder="Search by name or notes" value={search} onChange={(e) => setSearch(e.target.value)} className={inputClass} />
+        </label>
+        <label className="w-44">
+          <span className="sr-only">Status</span>
+          <select value={status} onChange={(e) => setStatus(e.target.value)} className={inputClass} aria-label="Filter by status">
+            <option value="">All statuses</option>
+            {MATCH_STATUSES.map((s) => <option key={s} value={s}>{s.replace('_', ' ')}</option>)}
+          </select>
+        </label>
+      </div>
+      <div className="overflow-x-auto rounded-lg border border-panel-line bg-white">
+        <table className="w-full text-left text-sm" aria-label="Matches">
+          <thead className="bg-panel-deep">
+            {table.getHeaderGroups().map((hg) => (
+              <tr key={hg.id}>
+                {hg.headers.map((h) => {
+                  const sorted = h.column.getIsSorted();
+                  return (
+                    <th key={h.id} className="p-0" aria-sort={sorted ? SORT_ARIA[sorted] : undefined}>
+                      {h.column.getCanSort() ? (
+                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="flex min-h-tap w-full items-center gap-1 p-3 text-left font-semibold">
+                          {flexRender(h.column.columnDef.header, h.getContext())}
+                          <span aria-hidden className="text-ink-soft">{sorted ? SORT_MARK[sorted] : '↕'}</span>
+                        </button>
+                      ) : (
+                        <span className="block p-3 font-semibold">{flexRender(h.column.columnDef.header, h.getContext())}</span>
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {table.getRowModel().rows.map((row) => (
+              <tr key={row.id} className="border-t border-panel-line align-top">
+                {row.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className="p-3">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        {table.getRowModel().rows.length === 0 ? <p className="p-4 text-ink-soft">No match fits this search.</p> : null}
+      </div>
+    </div>
+  );
+}

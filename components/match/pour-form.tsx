@@ -1,0 +1,108 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useCallback, useState } from 'react';
+import { useForm } from 'react-hook-form';
+import useSWR from 'swr';
+import { z } from 'zod';
+import { HeatCaution } from '@/components/safety/heat-caution';
+import { NEUTRAL, PhotoSampler } from '@/components/sampler/photo-sampler';
+import { Button } from '@/components/ui/button';
+import { Field, inputClass } from '@/components/ui/field';
+import { FormError } from '@/components/ui/form-error';
+import { PhotoDropzone } from '@/components/upload/photo-dropzone';
+import type { MatchDetail } from '@/db/queries/matchDetail';
+import type { Shape } from '@/lib/color/types';
+import { apiFetch, swrFetcher } from '@/lib/http/client';
+import type { UploadedPhoto } from '@/lib/uploads/limits';
+import { recipeLineSchema } from '@/lib/validations/match';
+import { type ColorantOption, RecipeLines } from './recipe-lines';
+
+const optionalNumber = (schema: z.ZodNumber) => z.preprocess((v) => (v === '' || Number.isNaN(v) ? undefined : v), schema.optional());
+const formSchema = z.object({
+  recipe: z.array(recipeLineSchema.and(z.object({ colorantId: z.string().min(1, 'choose a colorant') }))),
+  moldId: z.string().optional(),
+  batchCups: optionalNumber(z.number().gt(0, 'batch size must be more than 0').max(400)),
+  tempF: optionalNumber(z.number().min(32, 'at least 32 °F').max(500, 'at most 500 °F')),
+  notes: z.string().max(4000).optional(),
+  correctsPourId: z.string().optional(),
+});
+export type PourFormValues = z.input<typeof formSchema>;
+
+type Props = { match: MatchDetail; initialShapes: Record<string, Shape>; onSaved: (pourId: string) => void };
+
+export function PourForm({ match, initialShapes, onSaved }: Props) {
+  const { data: colorants } = useSWR<ColorantOption[]>('/api/colorants', swrFetcher);
+  const { data: molds } = useSWR<{ id: string; name: string }[]>('/api/molds', swrFetcher);
+  const [photo, setPhoto] = useState<UploadedPhoto | null>(null);
+  const [shapes, setShapes] = useState<Record<string, Shape>>(initialShapes);
+  const [error, setError] = useState<string | null>(null);
+  const onShapes = useCallback((s: Record<string, Shape>) => setShapes(s), []);
+  const { register, control, handleSubmit, setValue, formState } = useForm<PourFormValues>({ resolver: zodResolver(formSchema), defaultValues: { recipe: [], notes: '' } });
+  const missing = match.zones.filter((z) => !shapes[z]);
+
+  const onSubmit = handleSubmit(async (v) => {
+    setError(null);
+    if (!photo) return setError('Add the photo of this pour first.');
+    if (missing.length) return setError(`Mark every zone on the photo (missing: ${missing.join(', ')}).`);
+    const parsed = formSchema.parse(v);
+    try {
+      const pour = await apiFetch<{ id: string }>(`/api/matches/${match.id}/pours`, {
+        method: 'POST',
+        body: JSON.stringify({
+          photoId: photo.photoId,
+          recipe: parsed.recipe,
+          moldId: parsed.moldId || undefined,
+          batchCups: parsed.batchCups,
+          tempF: parsed.tempF,
+          notes: parsed.notes || undefined,
+          correctsPourId: parsed.correctsPourId || undefined,
+          zones: match.zones.map((name) => ({ name, shape: shapes[name] })),
+          neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL] } : undefined,
+        }),
+      });
+      onSaved(pour.id);
+    } catch (e) {
+      setError((e as Error).message);
+    }
+  });
+
+  return (
+    <form onSubmit={onSubmit} className="space-y-4" noValidate aria-label="New pour">
+      <RecipeLines control={control} register={register} setValue={setValue} errors={formState.errors} zones={match.zones} colorants={colorants ?? []} />
+      <div className="grid gap-3 sm:grid-cols-3">
+        <Field label="Mold">
+          <select className={inputClass} {...register('moldId')}>
+            <option value="">—</option>
+            {(molds ?? []).map((m) => <option key={m.id} value={m.id}>{m.name}</option>)}
+          </select>
+        </Field>
+        <Field label="Batch size (cups)" error={formState.errors.batchCups?.message}>
+          <input type="number" step="any" min="0" className={inputClass} {...register('batchCups', { valueAsNumber: true })} />
+        </Field>
+        <Field label="Pour / injection temperature (°F)" error={formState.errors.tempF?.message}>
+          <input type="number" step="1" className={inputClass} {...register('tempF', { valueAsNumber: true })} />
+        </Field>
+      </div>
+      <HeatCaution compact />
+      <Field label="Notes">
+        <textarea rows={2} className={`${inputClass} py-2`} {...register('notes')} />
+      </Field>
+      {match.pours.length ? (
+        <Field label="This pour corrects (optional)">
+          <select className={inputClass} {...register('correctsPourId')}>
+            <option value="">— a new iteration —</option>
+            {match.pours.map((p) => <option key={p.id} value={p.id}>pour #{p.number}</option>)}
+          </select>
+        </Field>
+      ) : null}
+      {photo ? (
+        <PhotoSampler src={`/api/photos/${photo.photoId}/image`} width={photo.width} height={photo.height} zones={match.zones} initialShapes={initialShapes} withNeutral onChange={onShapes} />
+      ) : (
+        <PhotoDropzone endpoint="pourPhoto" label="Add the photo of this pour" onUploaded={setPhoto} />
+      )}
+      <FormError message={error} />
+      <Button type="submit" disabled={formState.isSubmitting}>{formState.isSubmitting ? 'Measuring…' : 'Measure and save pour'}</Button>
+    </form>
+  );
+}

@@ -1,0 +1,123 @@
+'use client';
+
+import { useEffect, useRef, useState } from 'react';
+import { useStore } from 'zustand';
+import type { Shape } from '@/lib/color/types';
+import { shapeFromDrag, shapeLabelPoint, shapePath, toNormalised } from './geometry';
+import { createSamplerStore, NEUTRAL } from './sampler-store';
+import { SamplerToolbar } from './sampler-toolbar';
+import { useLivePreview } from './use-live-preview';
+
+export { NEUTRAL };
+
+type Props = {
+  src: string;
+  width: number;
+  height: number;
+  zones: string[];
+  initialShapes?: Record<string, Shape>;
+  withNeutral?: boolean;
+  onChange: (shapes: Record<string, Shape>) => void;
+};
+
+// Draw one region per zone (and optionally the grey card) over a photo, with
+// zoom and pan, on the neutral grey stage. Shapes are normalised to the photo
+// as displayed (0..1). A live preview of each zone's colour is computed in the
+// browser; the server measures for real when the maker confirms.
+export function PhotoSampler({ src, width, height, zones, initialShapes, withNeutral = false, onChange }: Props) {
+  const [store] = useState(() => createSamplerStore({ zones, shapes: initialShapes }));
+  const s = useStore(store);
+  const surface = useRef<SVGSVGElement>(null);
+  const [drag, setDrag] = useState<{ from: [number, number]; to: [number, number] } | null>(null);
+  const panFrom = useRef<{ x: number; y: number } | null>(null);
+  const previews = useLivePreview(src, s.shapes);
+
+  useEffect(() => onChange(s.shapes), [s.shapes, onChange]);
+
+  const onPointerDown = (e: React.PointerEvent<SVGSVGElement>) => {
+    if (!surface.current) return;
+    e.currentTarget.setPointerCapture(e.pointerId);
+    if (s.tool === 'pan') panFrom.current = { x: e.clientX, y: e.clientY };
+    else if (s.tool === 'polygon') s.addDraftPoint(toNormalised(surface.current, e.clientX, e.clientY));
+    else {
+      const p = toNormalised(surface.current, e.clientX, e.clientY);
+      setDrag({ from: p, to: p });
+    }
+  };
+  const onPointerMove = (e: React.PointerEvent<SVGSVGElement>) => {
+    if (!surface.current) return;
+    if (panFrom.current) {
+      s.panBy(e.clientX - panFrom.current.x, e.clientY - panFrom.current.y);
+      panFrom.current = { x: e.clientX, y: e.clientY };
+    } else if (drag) setDrag({ ...drag, to: toNormalised(surface.current, e.clientX, e.clientY) });
+  };
+  const onPointerUp = () => {
+    panFrom.current = null;
+    if (drag && (s.tool === 'rect' || s.tool === 'ellipse')) {
+      const shape = shapeFromDrag(s.tool, drag.from, drag.to);
+      if (shape) s.setShape(s.selected, shape);
+    }
+    setDrag(null);
+  };
+  const dragShape = drag && (s.tool === 'rect' || s.tool === 'ellipse') ? shapeFromDrag(s.tool, drag.from, drag.to) : null;
+  const labelOf = (zone: string) => (zone === NEUTRAL ? 'grey card' : zone);
+
+  return (
+    <div className="space-y-3">
+      <SamplerToolbar store={store} zones={zones} withNeutral={withNeutral} />
+      <div className="overflow-hidden rounded-md bg-stage p-3" data-testid="sampler-stage">
+        <div className="relative mx-auto w-full" style={{ maxWidth: `min(100%, ${Math.round((width / height) * 70)}vh)` }}>
+          <div style={{ transform: `translate(${s.panX}px, ${s.panY}px) scale(${s.zoom})`, transformOrigin: 'center' }} className="relative">
+            {/* eslint-disable-next-line @next/next/no-img-element */}
+            <img src={src} alt="Photo being sampled" className="block h-auto w-full select-none" draggable={false} width={width} height={height} />
+            <svg
+              ref={surface}
+              viewBox="0 0 1 1"
+              preserveAspectRatio="none"
+              className={`absolute inset-0 h-full w-full touch-none ${s.tool === 'pan' ? 'cursor-grab' : 'cursor-crosshair'}`}
+              onPointerDown={onPointerDown}
+              onPointerMove={onPointerMove}
+              onPointerUp={onPointerUp}
+              onDoubleClick={() => s.draft.length >= 3 && s.setShape(s.selected, { type: 'polygon', points: s.draft })}
+              role="img"
+              aria-label="Drawing surface: drag to draw the selected zone"
+            >
+              {Object.entries(s.shapes).map(([zone, shape]) => (
+                <g key={zone}>
+                  <path d={shapePath(shape)} fill="none" stroke="#000" strokeWidth={3} vectorEffect="non-scaling-stroke" />
+                  <path d={shapePath(shape)} fill="none" stroke={zone === s.selected ? '#fff' : '#ddd'} strokeWidth={1.5} strokeDasharray={zone === NEUTRAL ? '4 3' : undefined} vectorEffect="non-scaling-stroke" />
+                </g>
+              ))}
+              {dragShape ? <path d={shapePath(dragShape)} fill="none" stroke="#fff" strokeWidth={1.5} strokeDasharray="3 3" vectorEffect="non-scaling-stroke" /> : null}
+              {s.draft.length ? <polyline points={s.draft.map((p) => p.join(',')).join(' ')} fill="none" stroke="#fff" strokeWidth={1.5} vectorEffect="non-scaling-stroke" /> : null}
+            </svg>
+            {Object.entries(s.shapes).map(([zone, shape]) => {
+              const [x, y] = shapeLabelPoint(shape);
+              return (
+                <span key={zone} className="pointer-events-none absolute -translate-y-full rounded-sm bg-black/70 px-1 text-xs text-white" style={{ left: `${x * 100}%`, top: `${y * 100}%` }}>
+                  {labelOf(zone)}
+                </span>
+              );
+            })}
+          </div>
+        </div>
+      </div>
+      <ul className="grid gap-2 sm:grid-cols-2" aria-label="Live preview">
+        {[...zones, ...(withNeutral ? [NEUTRAL] : [])].map((zone) => {
+          const p = previews[zone];
+          return (
+            <li key={zone} className="flex items-center gap-3 rounded-md border border-panel-line bg-white p-2 text-sm">
+              <span className="h-10 w-10 shrink-0 rounded-sm border border-stage-rule" style={{ background: p?.hex ?? '#777777' }} aria-hidden />
+              <span>
+                <span className="block font-medium">{labelOf(zone)}</span>
+                <span className="num block text-ink-soft">
+                  {p ? `preview L* ${p.lab.l.toFixed(1)} a* ${p.lab.a.toFixed(1)} b* ${p.lab.b.toFixed(1)}` : 'not marked yet'}
+                </span>
+              </span>
+            </li>
+          );
+        })}
+      </ul>
+    </div>
+  );
+}

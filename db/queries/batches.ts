@@ -1,0 +1,90 @@
+import { and, asc, eq, inArray } from 'drizzle-orm';
+import { bandFor, describeDifference, labToHex } from '../../lib/color';
+import type { DB } from '../open';
+import { batches, matches, molds, pours, samples, users, zones } from '../schema';
+
+// Production batches in the API's Batch shape: ΔE00 per zone against the
+// standard pour's measured colour, and pass/fail against the match's
+// tolerance (stored when the batch was logged).
+function batchViews(database: DB, teamId: string, where: { batchId?: string; matchId?: string }) {
+  const cond = where.batchId ? eq(batches.id, where.batchId) : eq(batches.matchId, where.matchId!);
+  const rows = database
+    .select({ b: batches, by: users.name, mold: molds.name, matchName: matches.name, tolerance: matches.tolerance, stdNumber: pours.number })
+    .from(batches)
+    .innerJoin(matches, eq(matches.id, batches.matchId))
+    .innerJoin(pours, eq(pours.id, batches.standardPourId))
+    .leftJoin(users, eq(users.id, batches.createdBy))
+    .leftJoin(molds, eq(molds.id, batches.moldId))
+    .where(and(cond, eq(batches.teamId, teamId)))
+    .orderBy(asc(batches.createdAt), asc(batches.id))
+    .all();
+  if (rows.length === 0) return [];
+  const batchIds = rows.map((r) => r.b.id);
+  const stdIds = [...new Set(rows.map((r) => r.b.standardPourId))];
+  const matchIds = [...new Set(rows.map((r) => r.b.matchId))];
+  const batchSamples = database.select().from(samples).where(and(eq(samples.purpose, 'batch'), inArray(samples.batchId, batchIds))).all();
+  const stdSamples = database.select().from(samples).where(and(eq(samples.purpose, 'pour'), inArray(samples.pourId, stdIds))).all();
+  const zoneOrder = database.select({ matchId: zones.matchId, name: zones.name, position: zones.position }).from(zones)
+    .where(inArray(zones.matchId, matchIds)).orderBy(asc(zones.position)).all();
+  return rows.map(({ b, by, mold, matchName, tolerance, stdNumber }) => {
+    const order = zoneOrder.filter((z) => z.matchId === b.matchId).map((z) => z.name);
+    const zs = batchSamples
+      .filter((s) => s.batchId === b.id)
+      .sort((x, y) => order.indexOf(x.zone) - order.indexOf(y.zone))
+      .map((s) => {
+        const std = stdSamples.find((x) => x.pourId === b.standardPourId && x.zone === s.zone);
+        const lab = { l: s.l, a: s.a, b: s.b };
+        const stdLab = std ? { l: std.l, a: std.a, b: std.b } : null;
+        return {
+          name: s.zone,
+          lab,
+          hex: s.hex,
+          standard: stdLab ? { lab: stdLab, hex: labToHex(stdLab) } : null,
+          dE00: s.dE00!,
+          dL: s.dL!,
+          dC: s.dC!,
+          dH: s.dH!,
+          band: bandFor(s.dE00!),
+          withinTolerance: s.dE00! <= tolerance,
+          direction: stdLab ? describeDifference(stdLab, lab) : null,
+          shape: s.shape,
+          pixels: s.pixels,
+          kept: s.kept,
+          spread: s.spread,
+          glare: s.glare,
+          flake: s.flake,
+          whiteBalance: s.whiteBalance,
+        };
+      });
+    return {
+      id: b.id,
+      matchId: b.matchId,
+      matchName,
+      standardPourId: b.standardPourId,
+      standardPourNumber: stdNumber,
+      tolerance,
+      pass: b.pass,
+      zones: zs,
+      cups: b.cups,
+      moldId: b.moldId,
+      mold,
+      baits: b.baitsActual,
+      baitsExpected: b.baitsExpected,
+      photoId: b.photoId,
+      notes: b.notes,
+      createdBy: by,
+      createdAt: b.createdAt,
+    };
+  });
+}
+
+export function getBatch(database: DB, teamId: string, batchId: string) {
+  return batchViews(database, teamId, { batchId })[0] ?? null;
+}
+
+// A match's batches, oldest first (the order of a run chart).
+export function listBatches(database: DB, teamId: string, matchId: string) {
+  return batchViews(database, teamId, { matchId });
+}
+
+export type BatchView = NonNullable<ReturnType<typeof getBatch>>;

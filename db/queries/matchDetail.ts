@@ -1,0 +1,41 @@
+import { and, asc, eq } from 'drizzle-orm';
+import type { Shape } from '../../lib/color/types';
+import type { DB } from '../open';
+import { photos, samples } from '../schema';
+import { getMatch, type MatchView } from './matches';
+
+export type TargetPhoto = { photoId: string; width: number; height: number; zones: { name: string; shape: Shape; lab: { l: number; a: number; b: number }; hex: string }[] };
+export type TargetDetail = {
+  zones: { name: string; lab: { l: number; a: number; b: number }; hex: string; spread: number | null; flakeCoverage: number | null }[];
+  photos: TargetPhoto[];
+};
+export type MatchDetail = Omit<MatchView, 'target'> & { target: TargetDetail | null; targetPhotos: TargetPhoto[] };
+
+// A match with the reference photos its target was sampled on and each
+// zone's region, for the bench. `target` keeps the API's shape, with extras.
+export function getMatchDetail(database: DB, teamId: string, matchId: string): MatchDetail | null {
+  const match = getMatch(database, teamId, matchId);
+  if (!match) return null;
+  const rows = database
+    .select({ s: samples, width: photos.width, height: photos.height })
+    .from(samples)
+    .innerJoin(photos, eq(photos.id, samples.photoId))
+    .where(and(eq(samples.matchId, matchId), eq(samples.purpose, 'target'), eq(samples.teamId, teamId)))
+    .orderBy(asc(samples.createdAt))
+    .all();
+  const byPhoto = new Map<string, TargetPhoto>();
+  for (const { s, width, height } of rows) {
+    const p = byPhoto.get(s.photoId) ?? { photoId: s.photoId, width, height, zones: [] };
+    p.zones.push({ name: s.zone, shape: s.shape as Shape, lab: { l: s.l, a: s.a, b: s.b }, hex: s.hex });
+    byPhoto.set(s.photoId, p);
+  }
+  const targetPhotos = [...byPhoto.values()];
+  const flakeOf = (zone: string) => {
+    const zs = rows.filter((r) => r.s.zone === zone).map((r) => (r.s.flake as { coverage: number }).coverage);
+    return zs.length ? zs.reduce((a, b) => a + b, 0) / zs.length : null;
+  };
+  const target = match.target
+    ? { zones: match.target.zones.map((z) => ({ ...z, flakeCoverage: flakeOf(z.name) })), photos: targetPhotos }
+    : null;
+  return { ...match, target, targetPhotos };
+}

@@ -1,0 +1,75 @@
+import type { DoseUnit } from '@/db/schema';
+import { ML_PER_CUP, moldYield, scaleRecipe, type ScaledLine } from '@/lib/recipes';
+import { BATCH_SHEET_CAUTIONS, temperatureNote } from './safetyCautions';
+
+export type SheetRecipeLine = { zone: string; colorantId: string; colorant: string; kind: string; amount: number; unit: DoseUnit };
+export type SheetMold = { id: string; name: string; cavities: number; mlPerCavity: number; thickness: string };
+export type SheetZone = { name: string; lab: { l: number; a: number; b: number } | null; hex: string | null };
+
+export type BatchSheetInput = {
+  cups: number;
+  dropsPerMl: number;
+  sprueAllowanceMl: number;
+  /** The standard's zones in the match's order: the first is the top layer (the back). */
+  zones: SheetZone[];
+  recipe: SheetRecipeLine[];
+  molds: SheetMold[];
+  selectedMoldId: string | null;
+  tempF: number | null;
+};
+
+export type SheetLine = ScaledLine & { colorant: string; kind: string };
+
+// The arithmetic of a printable batch sheet: the standard's per-cup recipe
+// scaled to the batch (scaleRecipe: drops through the team's drops per mL,
+// teaspoons by the exact 1/48 cup), the yield of each mold (moldYield: batch
+// volume ÷ (mL per cavity × cavities + the team's sprue allowance)), the
+// laminate layout in zone order, the temperature and the cautions. Each zone's
+// doses are for the batch's cups of that zone's colour.
+export function buildBatchSheet(input: BatchSheetInput) {
+  const scaled = scaleRecipe(
+    input.recipe.map((l) => ({ zone: l.zone, colorantId: l.colorantId, name: l.colorant, amount: l.amount, unit: l.unit })),
+    input.cups,
+    input.dropsPerMl,
+  );
+  const recipe: SheetLine[] = scaled.map((s, i) => ({ ...s, colorant: input.recipe[i]!.colorant, kind: input.recipe[i]!.kind }));
+  const layout = input.zones.map((z, position) => ({
+    zone: z.name,
+    position,
+    lab: z.lab,
+    hex: z.hex,
+    recipe: recipe.filter((l) => l.zone === z.name),
+  }));
+  const molds = input.molds.map((m) => {
+    const y = m.cavities >= 1 && m.mlPerCavity > 0 ? moldYield(input.cups, m, input.sprueAllowanceMl) : null;
+    return {
+      id: m.id,
+      name: m.name,
+      cavities: m.cavities,
+      mlPerCavity: m.mlPerCavity,
+      thickness: m.thickness,
+      mlPerShot: y?.mlPerShot ?? null,
+      shots: y?.shots ?? null,
+      baits: y?.baits ?? null,
+      leftoverMl: y?.leftoverMl ?? null,
+      selected: m.id === input.selectedMoldId,
+    };
+  });
+  return {
+    cups: input.cups,
+    batchMl: input.cups * ML_PER_CUP,
+    dropsPerMl: input.dropsPerMl,
+    sprueAllowanceMl: input.sprueAllowanceMl,
+    tempF: input.tempF,
+    tempC: input.tempF === null ? null : ((input.tempF - 32) * 5) / 9,
+    tempNote: temperatureNote(input.tempF),
+    laminate: layout.length > 1,
+    order: layout.map((l) => l.zone).join(' over '),
+    layout,
+    recipe,
+    molds,
+    cautions: [...BATCH_SHEET_CAUTIONS],
+  };
+}
+
+export type BatchSheet = ReturnType<typeof buildBatchSheet>;

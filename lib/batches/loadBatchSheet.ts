@@ -1,0 +1,57 @@
+import { and, asc, eq, isNull, or } from 'drizzle-orm';
+import type { DB } from '@/db/open';
+import type { BatchView } from '@/db/queries/batches';
+import { colorants, molds, pours, recipeLines, teams, zones as zoneTable } from '@/db/schema';
+import { standardZones } from './logBatch';
+import { buildBatchSheet } from './buildBatchSheet';
+
+// The data of a batch's printable sheet: the batch, the standard it was
+// poured to, and the sheet arithmetic with the team's dropper and sprue
+// settings. Molds: the team's active molds, plus the batch's own mold even
+// if it has since been archived; the batch's mold (else the standard's) is
+// marked selected.
+export function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
+  const team = database.select().from(teams).where(eq(teams.id, teamId)).get()!;
+  const std = database.select().from(pours).where(and(eq(pours.id, batch.standardPourId), eq(pours.teamId, teamId))).get()!;
+  const recipe = database
+    .select({ zone: recipeLines.zone, colorantId: recipeLines.colorantId, colorant: colorants.name, kind: colorants.kind, amount: recipeLines.amount, unit: recipeLines.unit })
+    .from(recipeLines)
+    .innerJoin(colorants, eq(colorants.id, recipeLines.colorantId))
+    .where(eq(recipeLines.pourId, std.id))
+    .orderBy(asc(recipeLines.position))
+    .all();
+  const selectedMoldId = batch.moldId ?? std.moldId;
+  const moldRows = database
+    .select({ id: molds.id, name: molds.name, cavities: molds.cavities, mlPerCavity: molds.mlPerCavity, thickness: molds.thickness })
+    .from(molds)
+    .where(and(eq(molds.teamId, teamId), selectedMoldId ? or(isNull(molds.archivedAt), eq(molds.id, selectedMoldId)) : isNull(molds.archivedAt)))
+    .orderBy(asc(molds.name))
+    .all();
+  // Selected mold first: it is the one the sheet is for.
+  moldRows.sort((a, b) => Number(b.id === selectedMoldId) - Number(a.id === selectedMoldId));
+  // Layers in the match's zone order (the first is the top: the back over the
+  // belly), each zone the standard measured or doses.
+  const samples = standardZones(database, std.id);
+  const zones = database.select({ name: zoneTable.name }).from(zoneTable).where(eq(zoneTable.matchId, batch.matchId)).orderBy(asc(zoneTable.position)).all()
+    .filter((z) => samples.some((s) => s.zone === z.name) || recipe.some((l) => l.zone === z.name))
+    .map((z) => {
+      const s = samples.find((x) => x.zone === z.name);
+      return { name: z.name, lab: s ? { l: s.l, a: s.a, b: s.b } : null, hex: s?.hex ?? null };
+    });
+  const sheet = buildBatchSheet({
+    cups: batch.cups,
+    dropsPerMl: team.dropsPerMl,
+    sprueAllowanceMl: team.sprueAllowanceMl,
+    zones,
+    recipe,
+    molds: moldRows,
+    selectedMoldId,
+    tempF: std.tempF,
+  });
+  return {
+    batch: { id: batch.id, createdAt: batch.createdAt, createdBy: batch.createdBy, pass: batch.pass, baits: batch.baits, baitsExpected: batch.baitsExpected, notes: batch.notes },
+    match: { id: batch.matchId, name: batch.matchName, tolerance: batch.tolerance },
+    standard: { pourId: std.id, number: std.number, moldId: std.moldId, batchCups: std.batchCups },
+    ...sheet,
+  };
+}

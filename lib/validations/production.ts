@@ -1,0 +1,70 @@
+import { z } from 'zod';
+import { idField, neutralSchema, zoneRegionSchema } from './match';
+
+// Sign-off and production batches (issue #6). The ceilings are sanity limits
+// against typing slips, not shop limits: 400 cups is 25 gallons of plastisol.
+
+export const MAX_COMMENT = 2000;
+export const MAX_BATCH_CUPS = 400;
+export const MAX_BAITS = 100_000;
+
+const comment = (name: string) =>
+  z
+    .string({ error: `${name} must be text` })
+    .trim()
+    .max(MAX_COMMENT, `${name} must be at most ${MAX_COMMENT} characters`);
+
+// The body of a submit may be empty: `{}`, `null` or no body at all.
+export const submitSchema = z
+  .object({ note: comment('note').optional().nullable() }, { error: 'the body must be a JSON object' })
+  .nullish()
+  .transform((b) => ({ note: b?.note || null }));
+
+export const SIGN_OFF_DECISIONS = ['approved', 'rework'] as const;
+
+export const signOffSchema = z
+  .object(
+    {
+      decision: z.enum(SIGN_OFF_DECISIONS, { error: `decision must be one of ${SIGN_OFF_DECISIONS.join(', ')}` }),
+      comment: comment('comment').optional().nullable(),
+    },
+    { error: 'the body must be a JSON object' },
+  )
+  .superRefine((b, ctx) => {
+    if (b.decision === 'rework' && !b.comment) {
+      ctx.addIssue({ code: 'custom', path: ['comment'], message: 'say what to change' });
+    }
+  })
+  .transform((b) => ({ decision: b.decision, comment: b.comment || null }));
+
+const count = (name: string) =>
+  z
+    .number({ error: `${name} must be a number` })
+    .int(`${name} must be a whole number`)
+    .min(0, `${name} cannot be negative`)
+    .max(MAX_BAITS, `${name} must be at most ${MAX_BAITS}`);
+
+export const batchSchema = z.object(
+  {
+    photoId: idField,
+    zones: z
+      .array(zoneRegionSchema, { error: 'zones must be a list of { name, shape }' })
+      .min(1, 'mark at least one zone')
+      .max(16, 'at most 16 zones')
+      .refine((zs) => new Set(zs.map((z) => z.name)).size === zs.length, 'each zone may be marked once'),
+    neutral: neutralSchema.optional(),
+    cups: z
+      .number({ error: 'cups must be a number' })
+      .gt(0, 'cups must be more than 0')
+      .max(MAX_BATCH_CUPS, `cups must be at most ${MAX_BATCH_CUPS}`),
+    moldId: idField.optional().nullable(),
+    baits: count('baits').optional().nullable(),
+    baitsExpected: count('baitsExpected').optional().nullable(),
+    notes: z.string({ error: 'notes must be text' }).max(4000, 'notes must be at most 4000 characters').optional().nullable(),
+  },
+  { error: 'the body must be a JSON object' },
+);
+
+export type SubmitInput = z.infer<typeof submitSchema>;
+export type SignOffInput = z.infer<typeof signOffSchema>;
+export type BatchInput = z.infer<typeof batchSchema>;

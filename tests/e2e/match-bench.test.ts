@@ -1,0 +1,85 @@
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { artifactPath, browserAvailable, launchBrowser } from '../support/browser';
+import { baseUrl } from '../support/http';
+import { labToRgb8, twoTonePng } from '../support/photos';
+
+const TARGET = { back: labToRgb8({ l: 36, a: 12, b: 24 }), belly: labToRgb8({ l: 63, a: 14, b: 32 }) };
+const POURS = [
+  { back: labToRgb8({ l: 42, a: 9, b: 19 }), belly: labToRgb8({ l: 58, a: 16, b: 35 }) },
+  { back: labToRgb8({ l: 37, a: 11.5, b: 23 }), belly: labToRgb8({ l: 62, a: 14.5, b: 32.5 }) },
+];
+
+// Drags a rectangle over the sampler's drawing surface, in fractions of it.
+async function drag(page: Page, from: [number, number], to: [number, number]) {
+  const box = (await page.getByRole('img', { name: /Drawing surface/ }).boundingBox())!;
+  await page.mouse.move(box.x + from[0] * box.width, box.y + from[1] * box.height);
+  await page.mouse.down();
+  await page.mouse.move(box.x + ((from[0] + to[0]) / 2) * box.width, box.y + ((from[1] + to[1]) / 2) * box.height, { steps: 3 });
+  await page.mouse.move(box.x + to[0] * box.width, box.y + to[1] * box.height, { steps: 3 });
+  await page.mouse.up();
+}
+
+async function markZones(page: Page) {
+  await page.getByRole('button', { name: /^back/ }).click();
+  await drag(page, [0.15, 0.12], [0.85, 0.4]);
+  await page.getByRole('button', { name: /^belly/ }).click();
+  await drag(page, [0.15, 0.6], [0.85, 0.88]);
+}
+
+describe.runIf(browserAvailable())('browser: a whole match on the bench', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('creates a match, samples the reference, adds two pours and sees ΔE00 and the chart', async () => {
+    const page = await (await browser.newContext({ viewport: { width: 1280, height: 900 } })).newPage();
+    await page.goto(`${baseUrl()}/sign-in`);
+    await page.getByLabel('E-mail').fill('maker@demo.test');
+    await page.getByLabel('Password').fill('pourproof-demo');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL(/\/matches$/);
+
+    await page.getByRole('button', { name: 'New match' }).click();
+    const name = `Browser craw ${Date.now().toString(36)}`;
+    await page.getByRole('form', { name: 'New match' }).getByLabel('Name').fill(name);
+    await page.getByRole('button', { name: 'Create match' }).click();
+    await page.waitForURL(/\/matches\/[^/]+$/);
+    await page.getByRole('heading', { name, level: 1 }).waitFor();
+
+    await page.getByTestId('photo-input').setInputFiles({ name: 'reference.png', mimeType: 'image/png', buffer: await twoTonePng(TARGET.back, TARGET.belly, 400, 240) });
+    await page.getByRole('img', { name: /Drawing surface/ }).waitFor({ timeout: 20_000 });
+    await markZones(page);
+    await expect.poll(() => page.getByRole('list', { name: 'Live preview' }).textContent()).toMatch(/preview L\* 3\d/);
+    await page.getByRole('button', { name: 'Measure and save target' }).click();
+    await page.getByRole('list', { name: 'Target colours' }).waitFor({ timeout: 20_000 });
+
+    const pigment = (await page.request.get(`${baseUrl()}/api/colorants`).then((r) => r.json())).find((c: { kind: string }) => c.kind === 'pigment');
+    for (const [i, colours] of POURS.entries()) {
+      await page.getByRole('button', { name: 'New pour' }).click();
+      const form = page.getByRole('form', { name: 'New pour' });
+      await form.getByRole('button', { name: 'Add a recipe line' }).click();
+      await form.getByLabel('Line 1 colorant').selectOption(pigment.id);
+      await form.getByLabel('Line 1 amount').fill(String(6 - i));
+      await form.getByLabel('Batch size (cups)').fill('1');
+      await form.getByLabel('Pour / injection temperature (°F)').fill('335');
+      await page.getByTestId('photo-input').setInputFiles({ name: `pour-${i + 1}.png`, mimeType: 'image/png', buffer: await twoTonePng(colours.back, colours.belly, 400, 240) });
+      await page.getByRole('img', { name: /Drawing surface/ }).waitFor({ timeout: 20_000 });
+      // The shapes start from the reference's: no need to draw again.
+      await page.getByRole('button', { name: 'Measure and save pour' }).click();
+      await page.getByRole('heading', { name: `Pour #${i + 1} against the target` }).waitFor({ timeout: 20_000 });
+    }
+    const figures = await page.getByRole('region', { name: 'Pour #2 against the target' }).textContent();
+    expect(figures).toMatch(/ΔE00/);
+    expect(figures).toMatch(/ΔL\*/);
+    await page.getByRole('figure', { name: 'ΔE00 per zone across pours' }).locator('svg.recharts-surface').first().waitFor();
+    expect(await page.getByRole('list', { name: 'Pours' }).getByRole('button').count()).toBe(2);
+    await page.screenshot({ path: artifactPath('match-bench-1280.png'), fullPage: true });
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.screenshot({ path: artifactPath('match-bench-390.png'), fullPage: true });
+  });
+});
