@@ -1,4 +1,4 @@
-import { and, asc, eq, inArray } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import { bandFor, describeDifference, labToHex } from '../../lib/color';
 import type { DB } from '../open';
 import { batches, matches, molds, pours, samples, users, zones } from '../schema';
@@ -6,8 +6,10 @@ import { batches, matches, molds, pours, samples, users, zones } from '../schema
 // Production batches in the API's Batch shape: ΔE00 per zone against the
 // standard pour's measured colour, and pass/fail against the match's
 // tolerance (stored when the batch was logged).
-function batchViews(database: DB, teamId: string, where: { batchId?: string; matchId?: string }) {
-  const cond = where.batchId ? eq(batches.id, where.batchId) : eq(batches.matchId, where.matchId!);
+function batchViews(database: DB, teamId: string, where: { batchId?: string; matchId?: string; batchIds?: string[] }) {
+  const cond = where.batchIds
+    ? inArray(batches.id, where.batchIds)
+    : where.batchId ? eq(batches.id, where.batchId) : eq(batches.matchId, where.matchId!);
   const rows = database
     .select({ b: batches, by: users.name, mold: molds.name, matchName: matches.name, tolerance: matches.tolerance, stdNumber: pours.number })
     .from(batches)
@@ -85,6 +87,14 @@ export function getBatch(database: DB, teamId: string, batchId: string) {
 // A match's batches, oldest first (the order of a run chart).
 export function listBatches(database: DB, teamId: string, matchId: string) {
   return batchViews(database, teamId, { matchId });
+}
+
+// The team's most recent batches across all its standards, newest first.
+export function listRecentBatches(database: DB, teamId: string, limit = 100) {
+  const ids = database.select({ id: batches.id }).from(batches).where(eq(batches.teamId, teamId))
+    .orderBy(desc(batches.createdAt), desc(batches.id)).limit(limit).all().map((r) => r.id);
+  if (ids.length === 0) return [];
+  return batchViews(database, teamId, { batchIds: ids }).reverse();
 }
 
 export type BatchView = NonNullable<ReturnType<typeof getBatch>>;

@@ -52,6 +52,14 @@ export function describeZodError(error: z.ZodError): string {
   return where ? `${where}: ${first.message}` : first.message;
 }
 
+// The same, for a value that sits under `field` (a form field holding JSON).
+export function describeZodErrorAt(field: string, error: z.ZodError): string {
+  const first = error.issues[0];
+  if (!first || first.path.length === 0) return `${field}: ${first?.message ?? 'invalid'}`;
+  const d = describeZodError(error);
+  return d.startsWith('[') ? `${field}${d}` : `${field}.${d}`;
+}
+
 const MAX_JSON_BYTES = 256 * 1024;
 
 // Reads and validates a JSON body: 400 for malformed JSON or a body that fails

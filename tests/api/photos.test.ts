@@ -4,6 +4,7 @@ import sharp from 'sharp';
 import { UTApi } from 'uploadthing/server';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { api, baseUrl, expectErrorShape, signInAs, signUpShop } from '../support/http';
+import { heicLike, hugeHeaderPng } from '../support/photos';
 
 // POST /api/photos (multipart) and GET /api/photos/:id[/image] against the running app
 // and the uploads stand-in it stores through.
@@ -32,18 +33,6 @@ const noisyPng = (w: number, h: number) =>
 
 // A 1×1 PNG whose IHDR is patched to 30000×30000, CRC fixed (ISO/IEC 15948 §11.2.2): a
 // 900-megapixel header in a 70-byte file.
-async function hugeHeaderPng() {
-  const png = Buffer.from(await sharp({ create: { width: 1, height: 1, channels: 3, background: '#777777' } }).png().toBuffer());
-  png.writeUInt32BE(30000, 16);
-  png.writeUInt32BE(30000, 20);
-  const { crc32 } = await import('node:zlib');
-  png.writeUInt32BE(crc32(png.subarray(12, 29)) >>> 0, 29);
-  return png;
-}
-
-// An ISO BMFF 'ftyp' box with the HEIC brand, then filler: what an iPhone photo starts with.
-const heicLike = () => Buffer.concat([Buffer.from('00000018667479706865696300000000686569636d696631', 'hex'), randomBytes(2000)]);
-
 describe('photos API', () => {
   let maker: string;
   let db: Database.Database;

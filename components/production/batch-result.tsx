@@ -1,0 +1,75 @@
+'use client';
+
+import Link from 'next/link';
+import { useState } from 'react';
+import { BandBadge } from '@/components/color/band-badge';
+import { SurroundToggle, SwatchPair, type Surround } from '@/components/color/swatch-pair';
+import { RegionsOnPhoto } from '@/components/match/regions-on-photo';
+import type { BatchView } from '@/db/queries/batches';
+import type { Shape } from '@/lib/color/types';
+import { PassBadge } from './pass-badge';
+import { when } from './when';
+
+const signed = (v: number) => `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(2)}`;
+const lab = (l: { l: number; a: number; b: number }) => `L* ${l.l.toFixed(1)} a* ${l.a.toFixed(1)} b* ${l.b.toFixed(1)}`;
+
+// One production batch against its standard: pass or fail, then per zone the
+// standard and the batch side by side on the stage, with the figures beside.
+export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: () => void }) {
+  const [surround, setSurround] = useState<Surround>('grey');
+  const over = batch.zones.filter((z) => !z.withinTolerance).map((z) => z.name);
+  return (
+    <section aria-label="Batch result" className="space-y-3 rounded-lg border border-panel-line bg-white p-4">
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <div className="flex flex-wrap items-center gap-3">
+          <h3 className="text-lg font-semibold">Batch of <span className="num">{batch.cups} cups</span></h3>
+          <PassBadge pass={batch.pass} size="lg" />
+        </div>
+        {onClose ? <button type="button" onClick={onClose} className="min-h-tap rounded-md border border-panel-line bg-white px-3 text-sm font-medium">Close</button> : null}
+      </div>
+      <p className="text-sm">
+        {batch.pass
+          ? `Every zone is within the tolerance of ${batch.tolerance.toFixed(1)} ΔE00 against standard pour #${batch.standardPourNumber}.`
+          : `Over the tolerance of ${batch.tolerance.toFixed(1)} ΔE00 against standard pour #${batch.standardPourNumber}: ${over.join(', ')}. The leads have been e-mailed.`}
+      </p>
+      <p className="num text-sm text-ink-soft">
+        {[when(batch.createdAt), batch.createdBy ? `logged by ${batch.createdBy}` : null, batch.mold,
+          batch.baits !== null ? `${batch.baits} baits` : null, batch.baitsExpected !== null ? `${batch.baitsExpected} expected` : null, batch.notes]
+          .filter(Boolean).join(' · ')}
+      </p>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <Link href={`/batches/${batch.id}/sheet`} className="inline-flex min-h-tap items-center rounded-md border border-panel-line bg-white px-4 font-medium">
+          Batch sheet
+        </Link>
+        <SurroundToggle value={surround} onChange={setSurround} />
+      </div>
+      {batch.zones.map((z) => (
+        <div key={z.name} className="grid gap-4 rounded-lg border border-panel-line p-3 md:grid-cols-2">
+          <div>
+            <h4 className="mb-2 font-semibold capitalize">{z.name}</h4>
+            <SwatchPair surround={surround} left={z.standard?.hex ?? '#777777'} right={z.hex} leftLabel={`standard #${batch.standardPourNumber}`} rightLabel="batch" />
+          </div>
+          <div className="space-y-1 text-sm">
+            <p className="flex flex-wrap items-baseline gap-3">
+              <span className="num text-4xl font-semibold" aria-label={`ΔE00 ${z.dE00.toFixed(2)}`}>{z.dE00.toFixed(2)}</span>
+              <span className="text-ink-soft">ΔE00</span>
+              <BandBadge band={z.band} />
+              <span className="font-medium">{z.withinTolerance ? 'within tolerance' : 'over tolerance'}</span>
+            </p>
+            <p className="num">ΔL* {signed(z.dL)} · ΔC* {signed(z.dC)} · ΔH* {signed(z.dH)}</p>
+            {z.direction ? <p className="font-medium">{z.direction.text}</p> : null}
+            <p className="num text-ink-soft">Batch {lab(z.lab)}{z.standard ? ` · standard ${lab(z.standard.lab)}` : ''}</p>
+          </div>
+        </div>
+      ))}
+      <p className="text-xs text-ink-soft">
+        CIELAB with the D65 white, from sRGB; differences in CIEDE2000. Bands are rules of thumb for photo work, not a standard.
+      </p>
+      {batch.photoId ? (
+        <div className="max-w-xl">
+          <RegionsOnPhoto photoId={batch.photoId} regions={batch.zones.map((z) => ({ name: z.name, shape: z.shape as Shape }))} caption="Batch photo" />
+        </div>
+      ) : null}
+    </section>
+  );
+}
