@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { hashPassword } from '../lib/auth/password';
 import { newId } from '../lib/auth/tokens';
-import { type DB, openDatabase } from './open';
+import type { DB } from './open';
 import { type Role, colorants, matches, memberships, molds, teams, users, zones } from './schema';
 
 // An invented shop with invented people, colours and recipes: nothing here
@@ -44,9 +44,9 @@ const MOLDS: M[] = [
 ];
 
 const MATCHES = [
-  { name: 'Dusk crawdad', zones: [['back', 38.2, 9.5, 22.4], ['belly', 61.5, 12.1, 30.8]] as const, notes: 'Laminate: brown back over orange belly, black flake in the back.' },
-  { name: 'Pond ghost', zones: [['back', 72.4, -3.1, 6.2], ['belly', 84.0, -1.2, 3.5]] as const, notes: 'Translucent with silver pearl.' },
-  { name: 'Cinder minnow', zones: [['back', 34.0, -2.0, -8.5], ['belly', 78.0, -0.5, -1.0], ['tail', 45.0, 38.0, 20.0]] as const, notes: null },
+  { name: 'Dusk crawdad', zones: ['back', 'belly'], notes: 'Laminate: brown back over orange belly, black flake in the back.' },
+  { name: 'Pond ghost', zones: ['back', 'belly'], notes: 'Translucent with silver pearl.' },
+  { name: 'Cinder minnow', zones: ['back', 'belly', 'tail'], notes: null },
 ];
 
 export async function seedDemo(database: DB): Promise<boolean> {
@@ -67,11 +67,8 @@ export async function seedDemo(database: DB): Promise<boolean> {
       const matchId = newId();
       const at = Date.now() - (MATCHES.length - i) * 3600_000;
       tx.insert(matches).values({ id: matchId, teamId, name: m.name, tolerance: 2.0, notes: m.notes, createdBy: ids.maker, createdAt: at, updatedAt: at }).run();
-      m.zones.forEach(([name, l, a, b], position) => {
-        // The first match has its target sampled; the others wait for a reference photo.
-        const target = i === 0 ? { targetL: l, targetA: a, targetB: b, targetSpread: 0 } : {};
-        tx.insert(zones).values({ id: newId(), matchId, name, position, ...target }).run();
-      });
+      // Targets come from reference photos: see seed-demo-pours.ts.
+      m.zones.forEach((name, position) => tx.insert(zones).values({ id: newId(), matchId, name, position }).run());
     });
   });
   return true;
@@ -81,11 +78,4 @@ export function demoTeamId(database: DB): string | undefined {
   return database.select({ id: teams.id }).from(teams).where(eq(teams.name, DEMO_TEAM)).get()?.id;
 }
 
-if (process.argv[1] && /seed-demo\.ts$/.test(process.argv[1])) {
-  const file = process.env.DATABASE_URL ?? './data/pourproof.db';
-  const database = openDatabase(file, { migrate: true });
-  seedDemo(database).then((seeded) => {
-    console.log(seeded ? `seeded the demo shop into ${file}` : `${file} already has data; demo seed skipped`);
-    database.$client.close();
-  });
-}
+

@@ -1,8 +1,9 @@
 import { spawn } from 'node:child_process';
-import fs from 'node:fs';
 import path from 'node:path';
 import { openDatabase } from '../db/open';
-import { seedDemo } from '../db/seed-demo';
+import { demoTeamId, seedDemo } from '../db/seed-demo';
+import { seedDemoPours } from '../db/seed-demo-pours';
+import { buildIsStale } from './build-stale';
 import { run } from './run';
 import { startStandIns } from './standins';
 
@@ -15,18 +16,24 @@ const port = process.env.PORT ?? '3000';
 const dbFile = process.env.DATABASE_URL ?? './data/pourproof.db';
 
 async function main() {
+  const standIns = await startStandIns({ dataDir: path.join(path.dirname(path.resolve(dbFile)), 'standins') });
+  Object.assign(process.env, { ...standIns.env, ...process.env });
   const database = openDatabase(dbFile, { migrate: true });
   const seeded = await seedDemo(database);
+  const teamId = demoTeamId(database);
+  if (teamId) await seedDemoPours(database, teamId);
   database.$client.close();
   console.log(seeded ? `[launch] demo shop seeded into ${dbFile}` : `[launch] using ${dbFile}`);
 
-  if (mode === 'demo' && !fs.existsSync(path.join(root, '.next', 'BUILD_ID'))) {
-    console.log('[launch] no build yet: building once');
+  if (mode === 'demo' && buildIsStale(root)) {
+    console.log('[launch] no build of the current sources yet: building once');
     const code = await run(path.join(root, 'node_modules/.bin/next'), ['build']);
-    if (code !== 0) process.exit(code);
+    if (code !== 0) {
+      await standIns.close();
+      process.exit(code);
+    }
   }
 
-  const standIns = await startStandIns({ dataDir: path.join(path.dirname(path.resolve(dbFile)), 'standins') });
   const appUrl = process.env.APP_URL ?? `http://localhost:${port}`;
   const child = spawn(path.join(root, 'node_modules/.bin/next'), [mode === 'dev' ? 'dev' : 'start', '-p', port], {
     stdio: 'inherit',

@@ -10,6 +10,7 @@ const LINKS = [
   { href: '/photos', label: 'Photos' },
   { href: '/colorants', label: 'Colorants' },
   { href: '/molds', label: 'Molds' },
+  { href: '/standards', label: 'Standards' },
   { href: '/batches', label: 'Batches' },
   { href: '/team', label: 'Team' },
   { href: '/calculator', label: 'Calculator' },
@@ -45,7 +46,7 @@ export function AppNav({ member, devTools = false }: { member: { name: string; r
           })}
         </nav>
         <div className="ml-auto flex items-center gap-3 text-sm">
-          <span className="hidden text-right md:block">
+          <span className="hidden text-right xl:block">
             <span className="block font-medium">{member.name}</span>
             <span className="block text-ink-soft">{member.team} · {member.role}</span>
           </span>

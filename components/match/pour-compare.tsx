@@ -43,7 +43,7 @@ export function PourCompare({ pourId, previousId, target }: { pourId: string; pr
         <h4 className="mb-1 font-semibold">Recipe{previous ? ` (changes since pour #${previous.number})` : ''}</h4>
         <RecipeDiff current={pour.recipe} previous={previous?.recipe ?? null} />
         <p className="mt-2 text-sm text-ink-soft">
-          {[pour.mold ? `Mold: ${pour.mold}` : null, pour.batchCups ? `${pour.batchCups} cups` : null, pour.tempF ? `${pour.tempF} °F` : null, pour.notes].filter(Boolean).join(' · ')}
+          {[pour.mold ? `Mold: ${pour.mold}` : null, pour.batchCups ? `${pour.batchCups} cup${pour.batchCups === 1 ? "" : "s"}` : null, pour.tempF ? `${pour.tempF} °F` : null, pour.notes].filter(Boolean).join(' · ')}
         </p>
       </div>
     </section>

@@ -5,7 +5,8 @@ import os from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { openDatabase } from '../../db/open';
-import { seedDemo } from '../../db/seed-demo';
+import { demoTeamId, seedDemo } from '../../db/seed-demo';
+import { seedDemoPours } from '../../db/seed-demo-pours';
 import { startStandIns, type StandIns } from '../../scripts/standins';
 
 // Starts, once for the whole run: the local stand-ins (uploads, SMTP) and the
@@ -59,6 +60,7 @@ export default async function setup(project: TestProject) {
   const dbFile = path.join(tmp, 'app.db');
   const database = openDatabase(dbFile, { migrate: true });
   await seedDemo(database);
+  await seedDemoPours(database, demoTeamId(database)!);
   database.$client.close();
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
