@@ -1,0 +1,58 @@
+import { type ChildProcess, spawn } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import autocannon from 'autocannon';
+import { openDatabase } from '../db/open';
+import { seedDemo } from '../db/seed-demo';
+
+export type LoadResult = { rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number };
+
+// POST /api/delta-e under load against `next start` (production build in
+// .next, built by the caller), 10 s with 32 connections, as a signed-in member.
+export async function runDeltaELoad(root: string, port = 3199, seconds = 10): Promise<LoadResult> {
+  const tmp = fs.mkdtempSync(path.join(os.tmpdir(), 'pourproof-bench-'));
+  const dbFile = path.join(tmp, 'bench.db');
+  const database = openDatabase(dbFile, { migrate: true });
+  await seedDemo(database);
+  database.$client.close();
+  const base = `http://127.0.0.1:${port}`;
+  const child: ChildProcess = spawn(process.execPath, [path.join(root, 'node_modules/next/dist/bin/next'), 'start', '-p', String(port), '-H', '127.0.0.1'], {
+    cwd: root,
+    env: { ...process.env, NODE_ENV: 'production', DATABASE_URL: dbFile, APP_URL: base, NEXT_TELEMETRY_DISABLED: '1' },
+    stdio: 'ignore',
+  });
+  try {
+    for (let i = 0; i < 120; i++) {
+      const ok = await fetch(`${base}/api/health`).then((r) => r.ok).catch(() => false);
+      if (ok) break;
+      await new Promise((r) => setTimeout(r, 250));
+    }
+    const signIn = await fetch(`${base}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', origin: base },
+      body: JSON.stringify({ email: 'maker@demo.test', password: 'pourproof-demo' }),
+    });
+    const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
+    const result = await autocannon({
+      url: `${base}/api/delta-e`,
+      method: 'POST',
+      connections: 32,
+      duration: seconds,
+      headers: { 'content-type': 'application/json', origin: base, cookie },
+      body: JSON.stringify({ reference: { l: 50, a: 2.6772, b: -79.7751 }, sample: { l: 50, a: 0, b: -82.7485 }, tolerance: 2 }),
+    });
+    return {
+      rps: result.requests.average,
+      p50: result.latency.p50,
+      p975: result.latency.p97_5,
+      p99: result.latency.p99,
+      errors: result.errors,
+      non2xx: result.non2xx,
+      requests: result.requests.total,
+    };
+  } finally {
+    child.kill('SIGTERM');
+    fs.rmSync(tmp, { recursive: true, force: true });
+  }
+}

@@ -1,0 +1,32 @@
+import path from 'node:path';
+import { buildIsStale } from '../scripts/build-stale';
+import { run } from '../scripts/run';
+import { runDeltaELoad } from './delta-e-load';
+import { runMeasureBench } from './measure';
+
+// `npm run bench`: figures and ratios measured in this one run. Nothing here
+// passes or fails; the targets are printed beside the figures.
+async function main() {
+  const root = path.resolve(__dirname, '..');
+  console.log('== measuring a region: full pipeline vs sharp alone');
+  const m = await runMeasureBench();
+  console.log(`  ${m.width}×${m.height} JPEG, region ${m.regionPixels.toLocaleString('en')} px (a quarter), median of ${m.runs} runs`);
+  console.log(`  measurePhoto (decode + Lab + base/flake/glare): ${m.pipelineMs.toFixed(1)} ms`);
+  console.log(`  sharp decode + extract to raw pixels:           ${m.sharpMs.toFixed(1)} ms`);
+  console.log(`  ratio ${m.ratio.toFixed(2)} (target ≤ 1.5); every pixel, no lattice: ${m.exactMs.toFixed(1)} ms, ratio ${m.exactRatio.toFixed(2)}`);
+
+  if (buildIsStale(root)) {
+    console.log('\n== building the app for the load test');
+    const code = await run(path.join(root, 'node_modules/.bin/next'), ['build']);
+    if (code !== 0) process.exit(code);
+  }
+  console.log('\n== POST /api/delta-e under load (autocannon, 10 s, 32 connections, next start)');
+  const l = await runDeltaELoad(root);
+  console.log(`  ${l.rps.toFixed(0)} requests/s (${l.requests} in all, ${l.non2xx} non-2xx, ${l.errors} errors)`);
+  console.log(`  latency p50 ${l.p50} ms · p97.5 ${l.p975} ms · p99 ${l.p99} ms`);
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});
