@@ -1,5 +1,6 @@
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
-import { bandFor, describeDifference, labToHex } from '../../lib/color';
+import { describeDifference, labToHex } from '../../lib/color';
+import { sampleFigures } from './pours';
 import type { DB } from '../open';
 import { batches, matches, molds, pours, samples, users, zones } from '../schema';
 
@@ -42,20 +43,9 @@ function batchViews(database: DB, teamId: string, where: { batchId?: string; mat
           lab,
           hex: s.hex,
           standard: stdLab ? { lab: stdLab, hex: labToHex(stdLab) } : null,
-          dE00: s.dE00!,
-          dL: s.dL!,
-          dC: s.dC!,
-          dH: s.dH!,
-          band: bandFor(s.dE00!),
+          ...sampleFigures(s),
           withinTolerance: s.dE00! <= tolerance,
           direction: stdLab ? describeDifference(stdLab, lab) : null,
-          shape: s.shape,
-          pixels: s.pixels,
-          kept: s.kept,
-          spread: s.spread,
-          glare: s.glare,
-          flake: s.flake,
-          whiteBalance: s.whiteBalance,
         };
       });
     return {

@@ -1,7 +1,7 @@
 import { and, asc, eq } from 'drizzle-orm';
 import { bandFor, describeDifference, labToHex } from '../../lib/color';
 import type { DB } from '../open';
-import { colorants, molds, pours, recipeLines, samples, users, zones } from '../schema';
+import { type Sample, colorants, molds, pours, recipeLines, samples, users, zones } from '../schema';
 
 // A pour in the API's Pour shape: measured colour and ΔE00 per zone against
 // the target, with the direction in words, and its recipe per cup.
@@ -17,13 +17,7 @@ export function getPour(database: DB, teamId: string, pourId: string) {
   const { p } = row;
   const targets = database.select().from(zones).where(eq(zones.matchId, p.matchId)).orderBy(asc(zones.position)).all();
   const zoneSamples = database.select().from(samples).where(and(eq(samples.pourId, p.id), eq(samples.purpose, 'pour'))).all();
-  const recipe = database
-    .select({ zone: recipeLines.zone, colorantId: recipeLines.colorantId, colorant: colorants.name, kind: colorants.kind, amount: recipeLines.amount, unit: recipeLines.unit })
-    .from(recipeLines)
-    .innerJoin(colorants, eq(colorants.id, recipeLines.colorantId))
-    .where(eq(recipeLines.pourId, p.id))
-    .orderBy(asc(recipeLines.position))
-    .all();
+  const recipe = getRecipe(database, p.id);
   return {
     id: p.id,
     matchId: p.matchId,
@@ -50,23 +44,41 @@ export function getPour(database: DB, teamId: string, pourId: string) {
           lab,
           hex: s.hex,
           target: { lab: target, hex: labToHex(target) },
-          dE00: s.dE00!,
-          dL: s.dL!,
-          dC: s.dC!,
-          dH: s.dH!,
-          band: bandFor(s.dE00!),
+          ...sampleFigures(s),
           direction: describeDifference(target, lab),
-          shape: s.shape,
-          pixels: s.pixels,
-          kept: s.kept,
-          spread: s.spread,
-          glare: s.glare,
-          flake: s.flake,
-          whiteBalance: s.whiteBalance,
         };
       })
       .filter((z) => z !== null),
     recipe,
+  };
+}
+
+// A pour's recipe per cup, in the order it was written, with colorant names.
+export function getRecipe(database: DB, pourId: string) {
+  return database
+    .select({ zone: recipeLines.zone, colorantId: recipeLines.colorantId, colorant: colorants.name, kind: colorants.kind, amount: recipeLines.amount, unit: recipeLines.unit })
+    .from(recipeLines)
+    .innerJoin(colorants, eq(colorants.id, recipeLines.colorantId))
+    .where(eq(recipeLines.pourId, pourId))
+    .orderBy(asc(recipeLines.position))
+    .all();
+}
+
+// The measured figures of a compared sample (pour or batch zone), as the API shows them.
+export function sampleFigures(s: Sample) {
+  return {
+    dE00: s.dE00!,
+    dL: s.dL!,
+    dC: s.dC!,
+    dH: s.dH!,
+    band: bandFor(s.dE00!),
+    shape: s.shape,
+    pixels: s.pixels,
+    kept: s.kept,
+    spread: s.spread,
+    glare: s.glare,
+    flake: s.flake,
+    whiteBalance: s.whiteBalance,
   };
 }
 

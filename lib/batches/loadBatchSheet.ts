@@ -1,7 +1,8 @@
 import { and, asc, eq, isNull, or } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { BatchView } from '@/db/queries/batches';
-import { colorants, molds, pours, recipeLines, teams, zones as zoneTable } from '@/db/schema';
+import { getRecipe } from '@/db/queries/pours';
+import { molds, pours, teams, zones as zoneTable } from '@/db/schema';
 import { standardZones } from './logBatch';
 import { buildBatchSheet } from './buildBatchSheet';
 
@@ -13,13 +14,7 @@ import { buildBatchSheet } from './buildBatchSheet';
 export function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
   const team = database.select().from(teams).where(eq(teams.id, teamId)).get()!;
   const std = database.select().from(pours).where(and(eq(pours.id, batch.standardPourId), eq(pours.teamId, teamId))).get()!;
-  const recipe = database
-    .select({ zone: recipeLines.zone, colorantId: recipeLines.colorantId, colorant: colorants.name, kind: colorants.kind, amount: recipeLines.amount, unit: recipeLines.unit })
-    .from(recipeLines)
-    .innerJoin(colorants, eq(colorants.id, recipeLines.colorantId))
-    .where(eq(recipeLines.pourId, std.id))
-    .orderBy(asc(recipeLines.position))
-    .all();
+  const recipe = getRecipe(database, std.id);
   const selectedMoldId = batch.moldId ?? std.moldId;
   const moldRows = database
     .select({ id: molds.id, name: molds.name, cavities: molds.cavities, mlPerCavity: molds.mlPerCavity, thickness: molds.thickness })

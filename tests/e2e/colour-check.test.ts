@@ -1,6 +1,6 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactPath, browserAvailable, launchBrowser } from '../support/browser';
+import { artifactPath, browserAvailable, dragOnSurface, launchBrowser, signedInPage } from '../support/browser';
 import { baseUrl } from '../support/http';
 import { labToRgb8, twoTonePng } from '../support/photos';
 
@@ -14,23 +14,13 @@ describe.runIf(browserAvailable())('browser: the colour check page', () => {
   });
 
   it('measures a drawn region of a photo and compares two typed colours', async () => {
-    const page = await (await browser.newContext({ viewport: { width: 1100, height: 900 } })).newPage();
-    await page.goto(`${baseUrl()}/sign-in`);
-    await page.getByLabel('E-mail').fill('viewer@demo.test');
-    await page.getByLabel('Password').fill('pourproof-demo');
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(/\/matches$/);
+    const page = await signedInPage(browser, baseUrl(), 'viewer@demo.test', { width: 1100, height: 900 });
     await page.goto(`${baseUrl()}/calculator`);
 
     const top = labToRgb8({ l: 45, a: -20, b: 25 });
     await page.getByTestId('check-photo-input').setInputFiles({ name: 'swatch.png', mimeType: 'image/png', buffer: await twoTonePng(top, [220, 210, 200], 300, 200) });
-    const surface = page.getByRole('img', { name: /Drawing surface/ });
-    await surface.waitFor();
-    const box = (await surface.boundingBox())!;
-    await page.mouse.move(box.x + box.width * 0.2, box.y + box.height * 0.1);
-    await page.mouse.down();
-    await page.mouse.move(box.x + box.width * 0.8, box.y + box.height * 0.4, { steps: 4 });
-    await page.mouse.up();
+    await page.getByRole('img', { name: /Drawing surface/ }).waitFor();
+    await dragOnSurface(page, [0.2, 0.1], [0.8, 0.4]);
     await page.getByRole('button', { name: 'Measure', exact: true }).click();
     const readout = page.getByLabel('Measured colour');
     await readout.waitFor({ timeout: 15_000 });

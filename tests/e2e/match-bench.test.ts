@@ -1,6 +1,6 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactPath, browserAvailable, launchBrowser } from '../support/browser';
+import { artifactPath, browserAvailable, launchBrowser, dragOnSurface as drag, signedInPage } from '../support/browser';
 import { baseUrl } from '../support/http';
 import { labToRgb8, twoTonePng } from '../support/photos';
 
@@ -9,16 +9,6 @@ const POURS = [
   { back: labToRgb8({ l: 42, a: 9, b: 19 }), belly: labToRgb8({ l: 58, a: 16, b: 35 }) },
   { back: labToRgb8({ l: 37, a: 11.5, b: 23 }), belly: labToRgb8({ l: 62, a: 14.5, b: 32.5 }) },
 ];
-
-// Drags a rectangle over the sampler's drawing surface, in fractions of it.
-async function drag(page: Page, from: [number, number], to: [number, number]) {
-  const box = (await page.getByRole('img', { name: /Drawing surface/ }).boundingBox())!;
-  await page.mouse.move(box.x + from[0] * box.width, box.y + from[1] * box.height);
-  await page.mouse.down();
-  await page.mouse.move(box.x + ((from[0] + to[0]) / 2) * box.width, box.y + ((from[1] + to[1]) / 2) * box.height, { steps: 3 });
-  await page.mouse.move(box.x + to[0] * box.width, box.y + to[1] * box.height, { steps: 3 });
-  await page.mouse.up();
-}
 
 async function markZones(page: Page) {
   await page.getByRole('button', { name: /^back/ }).click();
@@ -37,12 +27,7 @@ describe.runIf(browserAvailable())('browser: a whole match on the bench', () => 
   });
 
   it('creates a match, samples the reference, adds two pours and sees ΔE00 and the chart', async () => {
-    const page = await (await browser.newContext({ viewport: { width: 1280, height: 900 } })).newPage();
-    await page.goto(`${baseUrl()}/sign-in`);
-    await page.getByLabel('E-mail').fill('maker@demo.test');
-    await page.getByLabel('Password').fill('pourproof-demo');
-    await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.waitForURL(/\/matches$/);
+    const page = await signedInPage(browser, baseUrl(), 'maker@demo.test', { width: 1280, height: 900 });
 
     await page.getByRole('button', { name: 'New match' }).click();
     const name = `Browser craw ${Date.now().toString(36)}`;

@@ -1,6 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { type Browser, chromium } from 'playwright-core';
+import { type Browser, type Page, chromium } from 'playwright-core';
 
 export const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
@@ -26,3 +26,25 @@ export function artifactPath(name: string): string {
   fs.mkdirSync(ARTIFACTS, { recursive: true });
   return path.join(ARTIFACTS, name);
 }
+
+// A fresh browser context signed in through the sign-in page.
+export async function signedInPage(browser: Browser, baseUrl: string, email: string, viewport = { width: 1280, height: 900 }, password = 'pourproof-demo') {
+  const page = await (await browser.newContext({ viewport })).newPage();
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL(/\/matches$/);
+  return page;
+}
+
+// Drags a rectangle over the sampler's drawing surface, in fractions of it.
+export async function dragOnSurface(page: Page, from: [number, number], to: [number, number]) {
+  const box = (await page.getByRole('img', { name: /Drawing surface/ }).boundingBox())!;
+  await page.mouse.move(box.x + from[0] * box.width, box.y + from[1] * box.height);
+  await page.mouse.down();
+  await page.mouse.move(box.x + ((from[0] + to[0]) / 2) * box.width, box.y + ((from[1] + to[1]) / 2) * box.height, { steps: 3 });
+  await page.mouse.move(box.x + to[0] * box.width, box.y + to[1] * box.height, { steps: 3 });
+  await page.mouse.up();
+}
+
