@@ -3,6 +3,8 @@
 import { useRouter, useSearchParams } from 'next/navigation';
 import { useState } from 'react';
 import useSWR from 'swr';
+import { MatchBatches } from '@/components/production/match-batches';
+import { SignOffPanel } from '@/components/production/signoff-panel';
 import { Button } from '@/components/ui/button';
 import type { MatchDetail } from '@/db/queries/matchDetail';
 import type { Shape } from '@/lib/color/types';
@@ -15,7 +17,9 @@ import { StatusBadge } from './status-badge';
 import { TargetSampling } from './target-panel';
 import { TargetSwatches } from './target-swatches';
 
-export function MatchBench({ matchId, canPour }: { matchId: string; canPour: boolean }) {
+type Production = { canDecide: boolean; sprueAllowanceMl: number };
+
+export function MatchBench({ matchId, canPour, production }: { matchId: string; canPour: boolean; production: Production }) {
   const key = `/api/matches/${matchId}`;
   const { data: match, error, mutate } = useSWR<MatchDetail>(key, swrFetcher);
   const params = useSearchParams();
@@ -33,6 +37,12 @@ export function MatchBench({ matchId, canPour }: { matchId: string; canPour: boo
   const select = (id: string) => {
     setMode('compare');
     router.replace(`/matches/${matchId}?pour=${id}`, { scroll: false });
+  };
+  const selectBatch = (id: string | null) => {
+    const q = new URLSearchParams(params.toString());
+    if (id) q.set('batch', id);
+    else q.delete('batch');
+    router.replace(`/matches/${matchId}?${q.toString()}`, { scroll: false });
   };
 
   return (
@@ -76,8 +86,11 @@ export function MatchBench({ matchId, canPour }: { matchId: string; canPour: boo
             </div>
           ) : null}
           {mode === 'compare' && selectedId && match.target ? <PourCompare key={selectedId} pourId={selectedId} previousId={previousId} target={match.target} /> : null}
+          {mode === 'compare' && selectedId ? <SignOffPanel key={`signoff-${selectedId}`} match={match} pourId={selectedId} canSubmit={canPour} canDecide={production.canDecide} /> : null}
         </section>
       ) : null}
+
+      <MatchBatches match={match} canLog={canPour} sprueAllowanceMl={production.sprueAllowanceMl} selectedId={params.get('batch')} onSelect={selectBatch} />
     </div>
   );
 }

@@ -19,7 +19,8 @@ import type { UploadedPhoto } from '@/lib/uploads/limits';
 import { MAX_BAITS, MAX_BATCH_CUPS } from '@/lib/validations/production';
 
 type Mold = { id: string; name: string; cavities: number; mlPerCavity: number };
-const blank = (v: unknown) => (v === '' || v === null || Number.isNaN(v) ? undefined : v);
+// Number inputs give strings: empty is "not given", anything else a number (NaN fails).
+const blank = (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v));
 const count = (name: string) =>
   z.preprocess(blank, z.number().int(`${name} is a whole number`).min(0, `${name} cannot be negative`).max(MAX_BAITS).optional());
 const formSchema = z.object({
@@ -36,22 +37,29 @@ type Props = { matchId: string; standardPourId: string; sprueAllowanceMl: number
 // Logs one production batch of the standard: size, mold and bait counts, a QC
 // photo with every zone of the standard marked (starting from the standard
 // pour's shapes). The server measures it and judges pass or fail.
-export function BatchForm({ matchId, standardPourId, sprueAllowanceMl, onLogged }: Props) {
-  const { data: std } = useSWR<PourView>(`/api/pours/${standardPourId}`, swrFetcher);
-  const { data: molds } = useSWR<Mold[]>('/api/molds', swrFetcher);
+export function BatchForm(props: Props) {
+  const { data: std, error } = useSWR<PourView>(`/api/pours/${props.standardPourId}`, swrFetcher);
+  const { data: molds, error: moldError } = useSWR<Mold[]>('/api/molds', swrFetcher);
+  const failed = error ?? moldError;
+  if (failed) return <p role="alert" className="text-band-off">Could not load the standard or the molds: {(failed as Error).message}</p>;
+  // The form starts from the standard's mold, so its options must be there first.
+  if (!std || !molds) return <p role="status" className="text-ink-soft">Loading the standard…</p>;
+  return <BatchFormFields {...props} std={std} molds={molds} />;
+}
+
+function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds }: Props & { std: PourView; molds: Mold[] }) {
   const [photo, setPhoto] = useState<UploadedPhoto | null>(null);
   const [shapes, setShapes] = useState<Record<string, Shape>>({});
   const [error, setError] = useState<string | null>(null);
   const onShapes = useCallback((s: Record<string, Shape>) => setShapes(s), []);
   const { register, handleSubmit, watch, formState } = useForm<Values>({
     resolver: zodResolver(formSchema),
-    values: { cups: '', moldId: std?.moldId ?? '', baitsExpected: '', baits: '', notes: '' },
-    resetOptions: { keepDirtyValues: true },
+    defaultValues: { cups: '', moldId: std.moldId ?? '', baitsExpected: '', baits: '', notes: '' },
   });
-  const zones = std?.zones.map((z) => z.name) ?? [];
+  const zones = std.zones.map((z) => z.name);
   const missing = zones.filter((z) => !shapes[z]);
   const cups = Number(watch('cups'));
-  const mold = molds?.find((m) => m.id === watch('moldId'));
+  const mold = molds.find((m) => m.id === watch('moldId'));
   const yieldHint = mold && cups > 0 && cups <= MAX_BATCH_CUPS ? moldYield(cups, mold, sprueAllowanceMl) : null;
 
   const onSubmit = handleSubmit(async (raw) => {
@@ -79,7 +87,6 @@ export function BatchForm({ matchId, standardPourId, sprueAllowanceMl, onLogged 
     }
   });
 
-  if (!std) return <p role="status" className="text-ink-soft">Loading the standard…</p>;
   const e = formState.errors;
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Log a batch" className="space-y-4">
@@ -90,13 +97,15 @@ export function BatchForm({ matchId, standardPourId, sprueAllowanceMl, onLogged 
         <Field label="Mold" hint={std.mold ? `The standard was poured in ${std.mold}.` : undefined}>
           <select className={inputClass} {...register('moldId')}>
             <option value="">—</option>
-            {(molds ?? []).map((m) => <option key={m.id} value={m.id}>{m.name}</option>)}
+            {molds.map((m) => <option key={m.id} value={m.id}>{m.name}</option>)}
           </select>
         </Field>
         <Field
           label="Expected bait count (optional)"
           error={e.baitsExpected?.message}
-          hint={yieldHint ? `Empty: ${yieldHint.baits} baits from ${yieldHint.shots} shots of ${yieldHint.mlPerShot.toFixed(1)} mL.` : 'Empty: worked out from the mold and batch size.'}
+          hint={yieldHint
+            ? `Leave empty to use the mold’s yield: ${yieldHint.baits} baits (${yieldHint.shots} shots of ${yieldHint.mlPerShot.toFixed(1)} mL).`
+            : 'Leave empty to work it out from the mold and the batch size.'}
         >
           <input type="number" inputMode="numeric" step="1" min="0" className={inputClass} {...register('baitsExpected')} />
         </Field>
@@ -109,7 +118,7 @@ export function BatchForm({ matchId, standardPourId, sprueAllowanceMl, onLogged 
       </Field>
       {photo ? (
         <>
-          <p className="text-sm">The zones start where they were on the standard pour’s photo: move them onto this batch’s baits, and mark the grey card if one is in frame.</p>
+          <p className="text-sm">The zones start where they were on the standard pour’s photo. If one does not sit on this batch’s baits, pick it and draw it again; mark the grey card too, if one is in frame.</p>
           <PhotoSampler
             src={`/api/photos/${photo.photoId}/image`}
             width={photo.width}

@@ -19,6 +19,10 @@ export function RunChart({ batches, zones, tolerance, title }: { batches: BatchV
     return row;
   });
   const worst = Math.max(tolerance, ...batches.flatMap((b) => b.zones.map((z) => z.dE00)));
+  // Round ticks (0.5 or whole ΔE00 steps) rather than recharts' fifths of the range.
+  const top = Math.ceil(worst + 0.5);
+  const step = top <= 3 ? 0.5 : top <= 8 ? 1 : Math.ceil(top / 8);
+  const ticks = Array.from({ length: Math.floor(top / step) + 1 }, (_, i) => i * step);
   return (
     <figure aria-label={`ΔE00 per zone across batches, ${title}`} className="rounded-lg border border-panel-line bg-white p-3">
       <figcaption className="mb-2 text-sm font-semibold">
@@ -29,7 +33,7 @@ export function RunChart({ batches, zones, tolerance, title }: { batches: BatchV
           <LineChart data={data} margin={{ top: 8, right: 16, bottom: 4, left: 0 }}>
             <CartesianGrid stroke="#e8e3db" />
             <XAxis dataKey="run" tickFormatter={(n) => `#${n}`} allowDecimals={false} />
-            <YAxis width={40} domain={[0, Math.ceil(worst + 0.5)]} tickFormatter={(v) => Number(v).toFixed(1)} />
+            <YAxis width={40} domain={[0, ticks[ticks.length - 1]!]} ticks={ticks} tickFormatter={(v) => Number(v).toFixed(1)} />
             <Tooltip
               formatter={(v, name) => [`${Number(v).toFixed(2)} ΔE00`, String(name)]}
               labelFormatter={(n, payload) => {

@@ -1,19 +1,39 @@
-// Shown wherever the app tells someone to heat, pour or inject plastisol.
-export function HeatCaution({ compact = false }: { compact?: boolean }) {
+import { SAFETY_CAUTIONS, TEMPERATURE_CAUTION, TRADE_NOTES } from '@/lib/batches/safetyCautions';
+
+// Shown wherever the app tells someone to heat, pour or inject plastisol. The
+// words come from lib/batches/safetyCautions.ts, the one place they are kept
+// (with their sources), so the bench, the batch sheet and the API agree.
+// Compact: the temperature caution with the rest one tap away (no hover).
+export function HeatCaution({ compact = false, tradeNotes = false }: { compact?: boolean; tradeNotes?: boolean }) {
+  const [lead, ...rest] = SAFETY_CAUTIONS;
   return (
     <aside role="note" aria-label="Safety caution" className="rounded-md border border-band-warn/40 bg-white p-3 text-sm">
-      <p className="font-semibold">⚠ Hot plastisol burns and gives off fumes</p>
+      <p className="font-semibold"><span aria-hidden>⚠ </span>{lead}</p>
       {compact ? (
-        <p className="mt-1">Gloves, long sleeves, eye protection, good ventilation; stay within the plastisol maker&apos;s temperature range (about 325–350 °F is usual). The safety data sheet and local codes come first.</p>
+        <>
+          <p className="mt-1">{TEMPERATURE_CAUTION}</p>
+          <details className="mt-1">
+            <summary className="flex min-h-tap cursor-pointer items-center font-medium text-accent">All safety cautions</summary>
+            <CautionList items={rest.filter((c) => c !== TEMPERATURE_CAUTION)} />
+          </details>
+        </>
       ) : (
-        <ul className="mt-1 list-disc space-y-0.5 pl-5">
-          <li>Wear heat-resistant gloves, long sleeves and eye protection.</li>
-          <li>Work with good ventilation, and a respirator where the product&apos;s safety data sheet asks for one.</li>
-          <li>Pots, cups and microwaves used for plastisol are never used for food again.</li>
-          <li>Stay within the plastisol maker&apos;s temperature range: about 325–350 °F (roughly 170 °C) is usual; overheated plastisol yellows, browns or burns.</li>
-          <li>Follow the product&apos;s safety data sheet and your local codes first.</li>
-        </ul>
+        <CautionList items={rest} />
       )}
+      {tradeNotes ? (
+        <>
+          <p className="mt-2 font-semibold">At the pot</p>
+          <CautionList items={TRADE_NOTES} />
+        </>
+      ) : null}
     </aside>
+  );
+}
+
+function CautionList({ items }: { items: readonly string[] }) {
+  return (
+    <ul className="mt-1 list-disc space-y-0.5 pl-5">
+      {items.map((c) => <li key={c}>{c}</li>)}
+    </ul>
   );
 }

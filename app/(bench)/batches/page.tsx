@@ -1,7 +1,24 @@
-import { ComingSoon } from '@/components/layout/coming-soon';
+import Link from 'next/link';
+import { db } from '@/db';
+import { listRecentBatches } from '@/db/queries/batches';
+import { RecentBatches } from '@/components/production/recent-batches';
+import { requirePageMember } from '@/lib/auth/current';
 
 export const metadata = { title: 'Batches' };
 
-export default function BatchesPage() {
-  return <ComingSoon title="Batches" what="Production batches of an approved standard will be logged and checked here against its tolerance." />;
+export default async function BatchesPage() {
+  const member = await requirePageMember();
+  const batches = listRecentBatches(db(), member.team.id);
+  return (
+    <section className="space-y-4">
+      <div>
+        <h1 className="text-2xl font-semibold">Batches</h1>
+        <p className="mt-1 text-ink-soft">
+          Production batches of the shop’s <Link href="/standards" className="underline underline-offset-4">standards</Link>, newest first: each is measured from its QC
+          photo and passes when every zone is within the match’s tolerance (ΔE00, CIEDE2000). Bands are rules of thumb for photo work, not a standard.
+        </p>
+      </div>
+      <RecentBatches batches={batches} />
+    </section>
+  );
 }

@@ -1,10 +1,13 @@
 import { db } from '@/db';
 import { listTeamMembers } from '@/db/queries/members';
+import { getTeamSettings } from '@/db/queries/teams';
 import { InviteForm } from '@/components/team/invite-form';
+import { SettingsForm } from '@/components/team/settings-form';
 import { MemberRowActions } from '@/components/team/member-row-actions';
 import { requirePageMember } from '@/lib/auth/current';
 import { listOpenInvitations } from '@/lib/team/invitations';
 import { changeRoleAction, removeMemberAction } from './actions';
+import { saveTeamSettings } from './settings-actions';
 
 export const metadata = { title: 'Team' };
 
@@ -54,6 +57,12 @@ export default async function TeamPage() {
               </ul>
             </div>
           ) : null}
+        </div>
+      ) : null}
+      {isOwner ? (
+        <div className="rounded-lg border border-panel-line bg-white p-4">
+          <h2 className="mb-3 text-lg font-semibold">Shop settings</h2>
+          <SettingsForm settings={getTeamSettings(db(), member.team.id)!} action={saveTeamSettings} />
         </div>
       ) : null}
     </section>

@@ -2,6 +2,7 @@ import { notFound } from 'next/navigation';
 import { Suspense } from 'react';
 import { db } from '@/db';
 import { getMatch } from '@/db/queries/matches';
+import { getTeamSettings } from '@/db/queries/teams';
 import { MatchBench } from '@/components/match/match-bench';
 import { requirePageMember } from '@/lib/auth/current';
 import { roleAtLeast } from '@/lib/auth/roles';
@@ -13,7 +14,11 @@ export default async function MatchPage({ params }: { params: Promise<{ id: stri
   if (!match) notFound();
   return (
     <Suspense fallback={<p role="status" className="text-ink-soft">Loading match…</p>}>
-      <MatchBench matchId={match.id} canPour={roleAtLeast(member.role, 'maker')} />
+      <MatchBench
+        matchId={match.id}
+        canPour={roleAtLeast(member.role, 'maker')}
+        production={{ canDecide: roleAtLeast(member.role, 'lead'), sprueAllowanceMl: getTeamSettings(db(), member.team.id)?.sprueAllowanceMl ?? 0 }}
+      />
     </Suspense>
   );
 }

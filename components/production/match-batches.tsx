@@ -1,0 +1,105 @@
+'use client';
+
+import { useEffect, useRef, useState } from 'react';
+import useSWR from 'swr';
+import { Button } from '@/components/ui/button';
+import type { BatchView } from '@/db/queries/batches';
+import type { MatchDetail } from '@/db/queries/matchDetail';
+import { swrFetcher } from '@/lib/http/client';
+import { BatchForm } from './batch-form';
+import { BatchResult } from './batch-result';
+import { PassBadge } from './pass-badge';
+import { RunChart } from './run-chart';
+import { when } from './when';
+
+type Props = {
+  match: MatchDetail;
+  canLog: boolean;
+  sprueAllowanceMl: number;
+  selectedId: string | null;
+  onSelect: (batchId: string | null) => void;
+};
+
+// Production of a match's standard: log a batch, see it pass or fail, the
+// run chart of each standard the match has had, and every batch logged.
+export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSelect }: Props) {
+  const key = `/api/matches/${match.id}/batches`;
+  const { data: batches, error, mutate } = useSWR<BatchView[]>(key, swrFetcher);
+  const [logging, setLogging] = useState(false);
+  const section = useRef<HTMLElement>(null);
+  const scrolled = useRef(false);
+  const selected = batches?.find((b) => b.id === selectedId) ?? null;
+
+  // Arriving from a failed-batch e-mail (?batch=…): bring the batch into view once.
+  useEffect(() => {
+    if (selected && !scrolled.current) {
+      scrolled.current = true;
+      section.current?.scrollIntoView({ block: 'start' });
+    }
+  }, [selected]);
+
+  if (!match.standardPourId) return null;
+  const standardIds = [...new Set([match.standardPourId, ...(batches ?? []).map((b) => b.standardPourId).reverse()])];
+
+  return (
+    <section ref={section} aria-labelledby="batches-h" className="space-y-3">
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <h2 id="batches-h" className="text-lg font-semibold">Production batches</h2>
+        {canLog && match.status !== 'archived' && !logging ? <Button onClick={() => setLogging(true)}>Log a batch</Button> : null}
+      </div>
+      <p className="text-sm text-ink-soft">
+        Each batch is checked against the standard (pour #{match.pours.find((p) => p.id === match.standardPourId)?.number}) within {match.tolerance.toFixed(1)} ΔE00 in every zone.
+      </p>
+      {logging ? (
+        <div className="rounded-lg border border-panel-line bg-white p-4">
+          <div className="mb-3 flex items-center justify-between gap-2">
+            <h3 className="text-lg font-semibold">Log a batch</h3>
+            <Button variant="secondary" onClick={() => setLogging(false)}>Cancel</Button>
+          </div>
+          <BatchForm
+            matchId={match.id}
+            standardPourId={match.standardPourId}
+            sprueAllowanceMl={sprueAllowanceMl}
+            onLogged={(b) => {
+              setLogging(false);
+              void mutate((list) => [...(list ?? []), b], { revalidate: true });
+              onSelect(b.id);
+            }}
+          />
+        </div>
+      ) : null}
+      {error ? <p role="alert" className="text-band-off">Could not load the batches: {(error as Error).message}</p> : null}
+      {!batches && !error ? <p role="status" className="text-ink-soft">Loading batches…</p> : null}
+      {selected ? <BatchResult batch={selected} onClose={() => onSelect(null)} /> : null}
+      {selectedId && batches && !selected ? <p role="alert" className="text-band-off">That batch is not one of this match’s.</p> : null}
+      {batches && batches.length === 0 ? <p className="text-ink-soft">No batches logged against the standard yet.</p> : null}
+      {batches && batches.length > 0 ? (
+        <>
+          {standardIds.map((sid) => {
+            const run = batches.filter((b) => b.standardPourId === sid);
+            if (run.length === 0) return null;
+            const n = run[0]!.standardPourNumber;
+            return <RunChart key={sid} batches={run} zones={match.zones} tolerance={match.tolerance} title={`Standard pour #${n}${sid === match.standardPourId ? '' : ' (retired)'}`} />;
+          })}
+          <ol aria-label="Batches" className="space-y-2">
+            {[...batches].reverse().map((b) => (
+              <li key={b.id}>
+                <button
+                  type="button"
+                  onClick={() => onSelect(b.id)}
+                  aria-current={b.id === selectedId ? 'true' : undefined}
+                  className={`flex min-h-tap w-full flex-wrap items-center gap-x-4 gap-y-1 rounded-md border px-3 py-2 text-left text-sm ${b.id === selectedId ? 'border-ink bg-white shadow-sm' : 'border-panel-line bg-panel'}`}
+                >
+                  <PassBadge pass={b.pass} />
+                  <span className="num">{when(b.createdAt)}</span>
+                  <span className="num">{b.cups} cups{b.mold ? ` · ${b.mold}` : ''}</span>
+                  <span className="num">{b.zones.map((z) => `${z.name} ${z.dE00.toFixed(1)} ΔE00`).join(' · ')}</span>
+                </button>
+              </li>
+            ))}
+          </ol>
+        </>
+      ) : null}
+    </section>
+  );
+}

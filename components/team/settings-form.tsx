@@ -1,0 +1,36 @@
+'use client';
+
+import { useActionState } from 'react';
+import type { SettingsState } from '@/app/(bench)/team/settings-actions';
+import { Button } from '@/components/ui/button';
+import { Field, inputClass } from '@/components/ui/field';
+import { VOLUME_LABEL, VOLUME_UNITS } from '@/lib/recipes/units';
+
+type Settings = { defaultTolerance: number; volumeUnit: string; dropsPerMl: number; sprueAllowanceMl: number };
+
+export function SettingsForm({ settings, action }: { settings: Settings; action: (p: SettingsState, f: FormData) => Promise<SettingsState> }) {
+  const [state, formAction, pending] = useActionState(action, null);
+  const err = state?.fieldErrors ?? {};
+  return (
+    <form action={formAction} className="grid gap-3 sm:grid-cols-2" aria-label="Team settings">
+      <Field label="Default tolerance (ΔE00)" error={err.defaultTolerance} hint="New matches start with it; 2.0 is usual for photo work.">
+        <input name="defaultTolerance" type="number" step="0.1" defaultValue={settings.defaultTolerance} className={inputClass} />
+      </Field>
+      <Field label="Batch size unit" error={err.volumeUnit}>
+        <select name="volumeUnit" defaultValue={settings.volumeUnit} className={inputClass}>
+          {VOLUME_UNITS.map((u) => <option key={u} value={u}>{VOLUME_LABEL[u]}</option>)}
+        </select>
+      </Field>
+      <Field label="Drops per mL (your dropper)" error={err.dropsPerMl} hint="About 20 is common; count the drops in 1 mL of your own dropper.">
+        <input name="dropsPerMl" type="number" step="0.5" defaultValue={settings.dropsPerMl} className={inputClass} />
+      </Field>
+      <Field label="Sprue allowance per shot (mL)" error={err.sprueAllowanceMl} hint="Plastisol lost to the sprue and runners each time the mold is filled.">
+        <input name="sprueAllowanceMl" type="number" step="0.5" defaultValue={settings.sprueAllowanceMl} className={inputClass} />
+      </Field>
+      <div className="flex items-center gap-3 sm:col-span-2">
+        <Button type="submit" disabled={pending}>Save settings</Button>
+        {state?.message ? <span role="status" className="text-sm text-ink-soft">{state.message}</span> : null}
+      </div>
+    </form>
+  );
+}

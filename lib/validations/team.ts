@@ -1,0 +1,9 @@
+import { z } from 'zod';
+import { VOLUME_UNITS } from '@/lib/recipes/units';
+
+export const teamSettingsSchema = z.object({
+  defaultTolerance: z.coerce.number({ error: 'tolerance must be a number' }).gt(0, 'tolerance must be more than 0').max(20, 'tolerance must be at most 20 ΔE00'),
+  volumeUnit: z.enum(VOLUME_UNITS, { error: `unit must be one of ${VOLUME_UNITS.join(', ')}` }),
+  dropsPerMl: z.coerce.number({ error: 'drops per mL must be a number' }).min(5, 'drops per mL must be at least 5').max(60, 'drops per mL must be at most 60'),
+  sprueAllowanceMl: z.coerce.number({ error: 'sprue allowance must be a number' }).min(0, 'sprue allowance cannot be negative').max(500, 'sprue allowance must be at most 500 mL'),
+});

@@ -1,0 +1,39 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { browserAvailable, launchBrowser } from '../support/browser';
+import { baseUrl, uniqueEmail } from '../support/http';
+
+describe.runIf(browserAvailable())('browser: a new shop signs up and sets its defaults', () => {
+  let browser: Browser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('signs up through the page, saves shop settings, and new matches take the default tolerance', async () => {
+    const page = await (await browser.newContext({ viewport: { width: 390, height: 844 } })).newPage();
+    await page.goto(`${baseUrl()}/sign-up`);
+    await page.getByLabel('Shop name').fill('Settings test shop');
+    await page.getByLabel('Your name').fill('Sam Owner');
+    await page.getByLabel('E-mail').fill(uniqueEmail('settings'));
+    await page.getByLabel('Password').fill('a long password');
+    await page.getByRole('button', { name: 'Create shop' }).click();
+    await page.waitForURL(/\/matches$/);
+
+    await page.goto(`${baseUrl()}/team`);
+    const form = page.getByRole('form', { name: 'Team settings' });
+    await form.getByLabel('Default tolerance (ΔE00)').fill('-1');
+    await form.getByRole('button', { name: 'Save settings' }).click();
+    await expect.poll(() => form.getByRole('alert').first().textContent()).toMatch(/more than 0/);
+    await form.getByLabel('Default tolerance (ΔE00)').fill('2.5');
+    await form.getByLabel('Drops per mL (your dropper)').fill('24');
+    await form.getByRole('button', { name: 'Save settings' }).click();
+    await expect.poll(() => form.getByRole('status').textContent()).toMatch(/saved/);
+
+    const res = await page.request.post(`${baseUrl()}/api/matches`, { data: { name: 'Uses the default', zones: ['back'] }, headers: { origin: baseUrl() } });
+    expect(res.status()).toBe(201);
+    expect((await res.json()).tolerance).toBe(2.5);
+  });
+});
