@@ -1,0 +1,77 @@
+// Shared types of the colour engine. Lab is CIELAB (CIE 15:2004) relative to the D65 white.
+export interface Lab {
+  l: number;
+  a: number;
+  b: number;
+}
+
+export type Vec3 = [number, number, number];
+/** Row-major 3×3 matrix. */
+export type Mat3 = [Vec3, Vec3, Vec3];
+
+/** Shapes in coordinates normalised (0..1) to the image as displayed (EXIF orientation applied). */
+export type RectShape = { type: 'rect'; x: number; y: number; w: number; h: number };
+export type EllipseShape = { type: 'ellipse'; cx: number; cy: number; rx: number; ry: number };
+export type PolygonShape = { type: 'polygon'; points: [number, number][] };
+export type Shape = RectShape | EllipseShape | PolygonShape;
+
+/** Pixel rectangle in image pixel coordinates. */
+export interface PixelBox {
+  left: number;
+  top: number;
+  width: number;
+  height: number;
+}
+
+/** 8-bit RGB pixels (3 bytes each, row-major) covering `box` of a larger image. */
+export interface PixelWindow extends PixelBox {
+  data: Uint8Array;
+}
+
+/**
+ * A region's colours, deduplicated: sample i stands for counts[i] pixels of 8-bit
+ * colour rgb[3i..3i+2] (as decoded, before white balance) and Lab lab[3i..3i+2]
+ * (after white balance, if any).
+ */
+export interface ColorSamples {
+  rgb: Uint8Array;
+  lab: Float64Array;
+  counts: Uint32Array;
+  /** Number of distinct samples. */
+  size: number;
+  /** Number of sampled pixels (sum of counts). */
+  total: number;
+  /** Number of pixels in the region; more than `total` when a lattice sample was taken. */
+  pixels: number;
+}
+
+export type Band = 'indistinguishable' | 'close' | 'noticeable' | 'off';
+
+export interface FlakeGroup {
+  lab: Lab;
+  hex: string;
+  /** Fraction (0..1) of the flake pixels in this group. */
+  share: number;
+}
+
+/** API.md's RegionMeasure without `name`. */
+export interface RegionMeasure {
+  lab: Lab;
+  hex: string;
+  pixels: number;
+  kept: number;
+  /** Median CIEDE2000 of the kept pixels to the base colour. */
+  spread: number;
+  /** Fraction (0..1) of the region's pixels taken as glare. */
+  glare: number;
+  flake: { coverage: number; groups: FlakeGroup[] };
+}
+
+export interface LabComparison {
+  dE00: number;
+  dL: number;
+  dC: number;
+  dH: number;
+  band: Band;
+  withinTolerance: boolean;
+}

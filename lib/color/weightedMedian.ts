@@ -1,0 +1,50 @@
+/**
+ * Count-weighted median of values[i·stride + offset] over the samples with include[i] !== 0 (all
+ * when include is omitted): the smallest value whose cumulative weight reaches half the total.
+ * Values are clamped to [lo, hi]. A histogram with bins of `step` finds the bin holding the middle
+ * weight in O(n + bins); the values in that bin are then sorted, so the result is exact.
+ * NaN when nothing is included.
+ */
+export function weightedMedian(
+  values: Float64Array,
+  weights: Uint32Array,
+  lo: number,
+  hi: number,
+  step: number,
+  include?: Uint8Array,
+  stride = 1,
+  offset = 0,
+): number {
+  const n = weights.length;
+  const bins = Math.ceil((hi - lo) / step) + 1;
+  const hist = new Float64Array(bins);
+  let sum = 0;
+  for (let i = 0; i < n; i++) {
+    if (include !== undefined && include[i] === 0) continue;
+    const b = Math.min(bins - 1, Math.max(0, Math.floor((values[i * stride + offset] - lo) / step)));
+    hist[b] += weights[i];
+    sum += weights[i];
+  }
+  if (sum === 0) return NaN;
+  const half = sum / 2;
+  let before = 0;
+  let bin = 0;
+  while (before + hist[bin] < half) before += hist[bin++];
+
+  // The values in that bin (same arithmetic as above, so the same samples), sorted.
+  const inBin: number[] = [];
+  const inWeight: number[] = [];
+  for (let i = 0; i < n; i++) {
+    if (include !== undefined && include[i] === 0) continue;
+    const v = values[i * stride + offset];
+    if (Math.min(bins - 1, Math.max(0, Math.floor((v - lo) / step))) !== bin) continue;
+    inBin.push(Math.min(hi, Math.max(lo, v)));
+    inWeight.push(weights[i]);
+  }
+  const order = inBin.map((_, k) => k).sort((p, q) => inBin[p] - inBin[q]);
+  for (const k of order) {
+    before += inWeight[k];
+    if (before >= half) return inBin[k];
+  }
+  return inBin[order[order.length - 1]];
+}

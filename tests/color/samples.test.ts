@@ -1,0 +1,93 @@
+import { describe, expect, it } from 'vitest';
+import { deltaE2000, measureRegion, packedRgbToLab, regionColors, shapeSpans, srgbToLab, weightedMedian } from '@/lib/color';
+import { measurePhoto } from '@/lib/image';
+import { encode, gauss, rawImage, rng, type Rgb } from './synth';
+
+describe('weightedMedian', () => {
+  it('equals a brute-force weighted median (smallest value reaching half the weight)', () => {
+    const rand = rng(3);
+    for (let trial = 0; trial < 50; trial++) {
+      const n = 1 + Math.floor(rand() * 300);
+      const values = Float64Array.from({ length: n }, () => (rand() - 0.3) * 40);
+      const weights = Uint32Array.from({ length: n }, () => 1 + Math.floor(rand() * 20));
+      const include = Uint8Array.from({ length: n }, () => (rand() < 0.8 ? 1 : 0));
+      include[0] = 1;
+      const pairs = Array.from(values, (v, i) => [v, weights[i], include[i]]).filter((p) => p[2]).sort((p, q) => p[0] - q[0]);
+      const half = pairs.reduce((s, p) => s + p[1], 0) / 2;
+      let acc = 0;
+      const brute = pairs.find((p) => (acc += p[1]) >= half)![0];
+      expect(weightedMedian(values, weights, -50, 50, 0.37, include)).toBe(brute);
+    }
+    expect(Number.isNaN(weightedMedian(new Float64Array(2), new Uint32Array([1, 1]), 0, 1, 0.1, new Uint8Array(2)))).toBe(true);
+  });
+});
+
+describe('regionColors', () => {
+  const W = 30, H = 20;
+  const rand = rng(9);
+  const data = Uint8Array.from({ length: W * H * 3 }, () => Math.floor(rand() * 4) * 60);
+  const window = { data, left: 0, top: 0, width: W, height: H };
+
+  it('counts every pixel once and keeps the colours exact', () => {
+    const spans = shapeSpans({ type: 'rect', x: 0, y: 0, w: 1, h: 1 }, W, H);
+    const s = regionColors(window, spans);
+    expect(s.total).toBe(W * H);
+    expect(s.pixels).toBe(W * H);
+    expect(s.counts.reduce((a, b) => a + b, 0)).toBe(W * H);
+    // Each distinct colour's count equals a brute-force count.
+    for (let i = 0; i < s.size; i++) {
+      let n = 0;
+      for (let j = 0; j < data.length; j += 3) if (data[j] === s.rgb[i * 3] && data[j + 1] === s.rgb[i * 3 + 1] && data[j + 2] === s.rgb[i * 3 + 2]) n++;
+      expect(s.counts[i]).toBe(n);
+    }
+    expect(Array.from(s.lab)).toEqual(Array.from(packedRgbToLab(s.rgb, s.size)));
+  });
+
+  it('on a lattice, samples every step-th pixel of every step-th row (image coordinates)', () => {
+    const spans = shapeSpans({ type: 'rect', x: 0.1, y: 0.1, w: 0.8, h: 0.8 }, W, H); // x 3..26, y 2..17
+    const s = regionColors({ ...window }, spans, undefined, 3);
+    expect(s.pixels).toBe(24 * 16);
+    // Rows 3, 6, 9, 12, 15 and columns 3, 6, …, 24: 5 × 8.
+    expect(s.total).toBe(5 * 8);
+  });
+});
+
+describe('lattice sampling in measurePhoto', () => {
+  it('a small sample budget measures the same as every pixel', async () => {
+    const noise = gauss(rng(11));
+    const base: Rgb = [160, 70, 50];
+    const raw = rawImage(400, 300, (x, y) => ((x * 31 + y * 17) % 23 < 3 ? [230, 200, 60] : base.map((v) => v + 2.5 * noise()) as Rgb));
+    const png = await encode(raw, 400, 300, 'png');
+    const region = [{ name: 'back', shape: { type: 'ellipse' as const, cx: 0.5, cy: 0.5, rx: 0.45, ry: 0.45 } }];
+    const full = (await measurePhoto(png, region, undefined, { maxSamples: Infinity })).regions[0];
+    const lattice = (await measurePhoto(png, region, undefined, { maxSamples: 20_000 })).regions[0];
+    expect(lattice.pixels).toBe(full.pixels);
+    expect(deltaE2000(lattice.lab, full.lab)).toBeLessThan(0.2);
+    expect(deltaE2000(full.lab, srgbToLab(...base))).toBeLessThan(0.5);
+    expect(Math.abs(lattice.flake.coverage - full.flake.coverage)).toBeLessThan(0.01);
+    expect(Math.abs(lattice.kept / full.kept - 1)).toBeLessThan(0.02);
+    expect(Math.abs(lattice.spread - full.spread)).toBeLessThan(0.1);
+  });
+});
+
+describe('measureRegion on a hand-made sample set', () => {
+  it('keeps the base, calls the far colour flake and the white glare', () => {
+    // 900 px base, 80 px dark flake, 20 px clipped white, as distinct samples with counts.
+    const rgb = new Uint8Array([100, 150, 60, 101, 149, 61, 20, 20, 30, 255, 255, 255]);
+    const counts = new Uint32Array([500, 400, 80, 20]);
+    const m = measureRegion({ rgb, lab: packedRgbToLab(rgb, 4), counts, size: 4, total: 1000, pixels: 1000 });
+    expect(m.kept).toBe(900);
+    expect(m.glare).toBeCloseTo(0.02, 12);
+    expect(m.flake.coverage).toBeCloseTo(0.08, 12);
+    expect(m.flake.groups).toHaveLength(1);
+    expect(m.flake.groups[0].share).toBeCloseTo(1, 12);
+    const mean = { l: 0, a: 0, b: 0 };
+    for (const [i, w] of [[0, 500], [1, 400]]) {
+      const lab = srgbToLab(rgb[i * 3], rgb[i * 3 + 1], rgb[i * 3 + 2]);
+      mean.l += (lab.l * w) / 900;
+      mean.a += (lab.a * w) / 900;
+      mean.b += (lab.b * w) / 900;
+    }
+    expect(deltaE2000(m.lab, mean)).toBeLessThan(1e-9);
+  });
+});
