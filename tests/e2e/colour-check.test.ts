@@ -1,20 +1,13 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactPath, browserAvailable, dragOnSurface, launchBrowser, signedInPage } from '../support/browser';
+import { describe, expect, it } from 'vitest';
+import { artifactPath, browserAvailable, dragOnSurface, useBrowser, signedInPage } from '../support/browser';
 import { baseUrl } from '../support/http';
 import { labToRgb8, twoTonePng } from '../support/photos';
 
 describe.runIf(browserAvailable())('browser: the colour check page', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = useBrowser();
 
   it('measures a drawn region of a photo and compares two typed colours', async () => {
-    const page = await signedInPage(browser, baseUrl(), 'viewer@demo.test', { width: 1100, height: 900 });
+    const page = await signedInPage(browser(), baseUrl(), 'viewer@demo.test', { width: 1100, height: 900 });
     await page.goto(`${baseUrl()}/calculator`);
 
     const top = labToRgb8({ l: 45, a: -20, b: 25 });

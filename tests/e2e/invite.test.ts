@@ -1,6 +1,5 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { artifactPath, browserAvailable, launchBrowser } from '../support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import { artifactPath, browserAvailable, useBrowser } from '../support/browser';
 import { DEMO_TEAM } from '../../db/seed-demo';
 import { api, baseUrl, signInAs, uniqueEmail } from '../support/http';
 
@@ -9,13 +8,7 @@ type Stored = { to: string[]; subject: string; text: string; html: string | null
 // The owner invites an address; the e-mail reaches the SMTP stand-in with a plain-text
 // part holding the link; a browser follows it, joins, and the session has the invited role.
 describe.runIf(browserAvailable())('browser: accept an e-mailed invitation', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = useBrowser();
 
   it('delivers the invitation by e-mail and lets the invitee join as lead', async () => {
     const owner = await signInAs('owner@demo.test', 'pourproof-demo', '10.63.0.1');
@@ -44,7 +37,7 @@ describe.runIf(browserAvailable())('browser: accept an e-mailed invitation', () 
     expect(mailbox.status).toBe(200);
     expect(mailbox.body.find((m: Stored) => m.text.includes(link!))).toBeTruthy();
 
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const context = await browser().newContext({ viewport: { width: 390, height: 844 } });
     const page = await context.newPage();
     await page.goto(link!);
     await page.getByRole('heading', { name: /^Join / }).waitFor();

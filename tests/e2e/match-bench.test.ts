@@ -1,6 +1,6 @@
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactPath, browserAvailable, launchBrowser, dragOnSurface as drag, signedInPage } from '../support/browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { artifactPath, browserAvailable, useBrowser, dragOnSurface as drag, signedInPage } from '../support/browser';
 import { baseUrl } from '../support/http';
 import { labToRgb8, twoTonePng } from '../support/photos';
 
@@ -18,16 +18,10 @@ async function markZones(page: Page) {
 }
 
 describe.runIf(browserAvailable())('browser: a whole match on the bench', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = useBrowser();
 
   it('creates a match, samples the reference, adds two pours and sees ΔE00 and the chart', async () => {
-    const page = await signedInPage(browser, baseUrl(), 'maker@demo.test', { width: 1280, height: 900 });
+    const page = await signedInPage(browser(), baseUrl(), 'maker@demo.test', { width: 1280, height: 900 });
 
     await page.getByRole('button', { name: 'New match' }).click();
     const name = `Browser craw ${Date.now().toString(36)}`;

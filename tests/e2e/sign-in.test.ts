@@ -1,19 +1,12 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactPath, browserAvailable, launchBrowser } from '../support/browser';
+import { describe, expect, it } from 'vitest';
+import { artifactPath, browserAvailable, useBrowser } from '../support/browser';
 import { baseUrl } from '../support/http';
 
 describe.runIf(browserAvailable())('browser: sign in as the demo maker', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = useBrowser();
 
   it('signs in, sees the matches list, signs out', async () => {
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const context = await browser().newContext({ viewport: { width: 390, height: 844 } });
     const page = await context.newPage();
     await page.goto(`${baseUrl()}/matches`);
     // Signed out: the proxy sends us to the sign-in page.

@@ -1,9 +1,9 @@
 import { spawnSync } from 'node:child_process';
 import fs from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { SAFETY_CAUTIONS } from '../../lib/batches/safetyCautions';
-import { artifactPath, browserAvailable, launchBrowser } from '../support/browser';
+import { artifactPath, browserAvailable, useBrowser } from '../support/browser';
 import { api, baseUrl, signInAs, signUpShop } from '../support/http';
 import { waitForMail } from '../support/mail';
 import { BACK_SHAPE, BELLY_SHAPE, labToRgb8, twoTonePng, uploadPhoto } from '../support/photos';
@@ -48,13 +48,7 @@ async function signIn(page: Page, email: string) {
 }
 
 describe.runIf(browserAvailable())('browser: sign-off, a production batch and its printed sheet', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = useBrowser();
 
   it('the lead approves from the e-mail link, logs a passing batch and prints its sheet', async () => {
     const { matchId, pourId, mold } = await makerSubmitsAPour();
@@ -63,7 +57,7 @@ describe.runIf(browserAvailable())('browser: sign-off, a production batch and it
     expect(link).toContain(`/matches/${matchId}?pour=${pourId}`);
 
     // At the bench on a phone: the whole lead's path at 390 px.
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 }, extraHTTPHeaders: { 'x-forwarded-for': '10.72.0.2' } });
+    const context = await browser().newContext({ viewport: { width: 390, height: 844 }, extraHTTPHeaders: { 'x-forwarded-for': '10.72.0.2' } });
     const page = await context.newPage();
     await signIn(page, 'lead@demo.test');
     await page.goto(link!);

@@ -1,19 +1,12 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { browserAvailable, launchBrowser } from '../support/browser';
+import { describe, expect, it } from 'vitest';
+import { browserAvailable, useBrowser } from '../support/browser';
 import { baseUrl, uniqueEmail } from '../support/http';
 
 describe.runIf(browserAvailable())('browser: a new shop signs up and sets its defaults', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = useBrowser();
 
   it('signs up through the page, saves shop settings, and new matches take the default tolerance', async () => {
-    const page = await (await browser.newContext({ viewport: { width: 390, height: 844 } })).newPage();
+    const page = await (await browser().newContext({ viewport: { width: 390, height: 844 } })).newPage();
     await page.goto(`${baseUrl()}/sign-up`);
     await page.getByLabel('Shop name').fill('Settings test shop');
     await page.getByLabel('Your name').fill('Sam Owner');

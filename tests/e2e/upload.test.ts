@@ -1,26 +1,19 @@
 import { randomBytes } from 'node:crypto';
-import type { Browser } from 'playwright-core';
 import sharp from 'sharp';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactPath, browserAvailable, launchBrowser } from '../support/browser';
+import { describe, expect, it } from 'vitest';
+import { artifactPath, browserAvailable, useBrowser } from '../support/browser';
 import { api, baseUrl, signInAs } from '../support/http';
 
 // The Photos page in Chromium: the demo maker drops a PNG on the dropzone (through
 // @uploadthing/react to the uploads stand-in), sees it on the stage with its size,
 // and it lands in the team's list.
 describe.runIf(browserAvailable())('browser: upload a photo on the Photos page', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = useBrowser();
 
   async function contextAs(email: string, ip: string) {
     const cookie = await signInAs(email, 'pourproof-demo', ip);
     const [name, value] = cookie.split('=') as [string, string];
-    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const context = await browser().newContext({ viewport: { width: 390, height: 844 } });
     await context.addCookies([{ name, value, url: baseUrl() }]);
     return { context, cookie };
   }

@@ -1,3 +1,4 @@
+import { afterAll, beforeAll } from 'vitest';
 import fs from 'node:fs';
 import path from 'node:path';
 import { type Browser, type Page, chromium } from 'playwright-core';
@@ -48,3 +49,18 @@ export async function dragOnSurface(page: Page, from: [number, number], to: [num
   await page.mouse.up();
 }
 
+
+// One Chromium for the tests of a describe block: launched before, closed after.
+export function useBrowser(): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error('the browser is not launched yet');
+    return browser;
+  };
+}
