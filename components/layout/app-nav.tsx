@@ -2,7 +2,7 @@
 
 import Link from 'next/link';
 import { usePathname, useRouter } from 'next/navigation';
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { Wordmark } from './wordmark';
 
 const LINKS = [
@@ -20,6 +20,11 @@ export function AppNav({ member, devTools = false }: { member: { name: string; r
   const pathname = usePathname();
   const router = useRouter();
   const [busy, setBusy] = useState(false);
+  const navRef = useRef<HTMLElement>(null);
+  // On a phone the links scroll sideways: keep the current section in view.
+  useEffect(() => {
+    navRef.current?.querySelector('[aria-current="page"]')?.scrollIntoView({ block: 'nearest', inline: 'center' });
+  }, [pathname]);
   async function signOut() {
     setBusy(true);
     await fetch('/api/auth/sign-out', { method: 'POST' }).catch(() => null);
@@ -30,7 +35,7 @@ export function AppNav({ member, devTools = false }: { member: { name: string; r
     <header className="border-b border-panel-line bg-panel-deep">
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">
         <Link href="/matches" aria-label="Pourproof home"><Wordmark /></Link>
-        <nav aria-label="Main" className="order-3 -mx-1 flex w-full gap-1 overflow-x-auto sm:order-none sm:w-auto">
+        <nav ref={navRef} aria-label="Main" className="order-3 -mx-1 flex w-full gap-1 overflow-x-auto sm:order-none sm:w-auto">
           {(devTools ? [...LINKS, { href: '/dev/mailbox', label: 'Mailbox' }] : LINKS).map((l) => {
             const active = pathname === l.href || pathname.startsWith(`${l.href}/`);
             return (

@@ -7,6 +7,7 @@ import { MatchBatches } from '@/components/production/match-batches';
 import { SignOffPanel } from '@/components/production/signoff-panel';
 import { Button } from '@/components/ui/button';
 import type { MatchDetail } from '@/db/queries/matchDetail';
+import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { swrFetcher } from '@/lib/http/client';
 import { DeltaChart } from './delta-chart';
@@ -22,6 +23,9 @@ type Production = { canDecide: boolean; sprueAllowanceMl: number };
 export function MatchBench({ matchId, canPour, production }: { matchId: string; canPour: boolean; production: Production }) {
   const key = `/api/matches/${matchId}`;
   const { data: match, error, mutate } = useSWR<MatchDetail>(key, swrFetcher);
+  // The next pour's regions start from the previous pour's, else the reference's.
+  const latestPourId = match?.pours[match.pours.length - 1]?.id;
+  const { data: latestPour } = useSWR<PourView>(latestPourId ? `/api/pours/${latestPourId}` : null, swrFetcher);
   const params = useSearchParams();
   const router = useRouter();
   const [mode, setMode] = useState<'compare' | 'pour' | 'reference'>('compare');
@@ -33,7 +37,8 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
   const selectedIndex = match.pours.findIndex((p) => p.id === selectedId);
   const previousId = selectedIndex > 0 ? match.pours[selectedIndex - 1]!.id : null;
   const editable = canPour && match.status === 'open';
-  const lastShapes = (): Record<string, Shape> => Object.fromEntries((match.target?.photos[0]?.zones ?? []).map((z) => [z.name, z.shape]));
+  const lastShapes = (): Record<string, Shape> =>
+    Object.fromEntries((latestPour?.zones ?? match.target?.photos[0]?.zones ?? []).map((z) => [z.name, z.shape as Shape]));
   const select = (id: string) => {
     setMode('compare');
     router.replace(`/matches/${matchId}?pour=${id}`, { scroll: false });
@@ -82,7 +87,8 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
                 <h3 className="text-lg font-semibold">Pour #{(latest?.number ?? 0) + 1}</h3>
                 <Button variant="secondary" onClick={() => setMode('compare')}>Cancel</Button>
               </div>
-              <PourForm match={match} initialShapes={lastShapes()} onSaved={(id) => { void mutate(); select(id); }} />
+              {latestPourId && !latestPour ? <p role="status" className="text-ink-soft">Loading the last pour…</p> : null}
+              {!latestPourId || latestPour ? <PourForm match={match} initialShapes={lastShapes()} previous={latestPour} onSaved={(id) => { void mutate(); select(id); }} /> : null}
             </div>
           ) : null}
           {mode === 'compare' && selectedId && match.target ? <PourCompare key={selectedId} pourId={selectedId} previousId={previousId} target={match.target} /> : null}

@@ -12,6 +12,7 @@ import { Field, inputClass } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
 import { PhotoDropzone } from '@/components/upload/photo-dropzone';
 import type { MatchDetail } from '@/db/queries/matchDetail';
+import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { apiFetch, swrFetcher } from '@/lib/http/client';
 import type { UploadedPhoto } from '@/lib/uploads/limits';
@@ -29,16 +30,26 @@ const formSchema = z.object({
 });
 export type PourFormValues = z.input<typeof formSchema>;
 
-type Props = { match: MatchDetail; initialShapes: Record<string, Shape>; onSaved: (pourId: string) => void };
+type Props = { match: MatchDetail; initialShapes: Record<string, Shape>; previous?: PourView; onSaved: (pourId: string) => void };
 
-export function PourForm({ match, initialShapes, onSaved }: Props) {
+export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
   const { data: colorants } = useSWR<ColorantOption[]>('/api/colorants', swrFetcher);
   const { data: molds } = useSWR<{ id: string; name: string }[]>('/api/molds', swrFetcher);
   const [photo, setPhoto] = useState<UploadedPhoto | null>(null);
   const [shapes, setShapes] = useState<Record<string, Shape>>(initialShapes);
   const [error, setError] = useState<string | null>(null);
   const onShapes = useCallback((s: Record<string, Shape>) => setShapes(s), []);
-  const { register, control, handleSubmit, setValue, formState } = useForm<PourFormValues>({ resolver: zodResolver(formSchema), defaultValues: { recipe: [], notes: '' } });
+  const { register, control, handleSubmit, setValue, formState } = useForm<PourFormValues>({
+    resolver: zodResolver(formSchema),
+    // The last pour's recipe, mold, size and temperature, ready to adjust.
+    defaultValues: {
+      recipe: (previous?.recipe ?? []).map(({ zone, colorantId, amount, unit }) => ({ zone, colorantId, amount, unit })),
+      moldId: previous?.moldId ?? '',
+      batchCups: previous?.batchCups ?? undefined,
+      tempF: previous?.tempF ?? undefined,
+      notes: '',
+    },
+  });
   const missing = match.zones.filter((z) => !shapes[z]);
 
   const onSubmit = handleSubmit(async (v) => {
@@ -67,14 +78,16 @@ export function PourForm({ match, initialShapes, onSaved }: Props) {
     }
   });
 
+  // The selects need their options before the form's values can show in them.
+  if (!colorants || !molds) return <p role="status" className="text-ink-soft">Loading the colorant and mold libraries…</p>;
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate aria-label="New pour">
-      <RecipeLines control={control} register={register} setValue={setValue} errors={formState.errors} zones={match.zones} colorants={colorants ?? []} />
+      <RecipeLines control={control} register={register} setValue={setValue} errors={formState.errors} zones={match.zones} colorants={colorants} />
       <div className="grid gap-3 sm:grid-cols-3">
         <Field label="Mold">
           <select className={inputClass} {...register('moldId')}>
             <option value="">—</option>
-            {(molds ?? []).map((m) => <option key={m.id} value={m.id}>{m.name}</option>)}
+            {molds.map((m) => <option key={m.id} value={m.id}>{m.name}</option>)}
           </select>
         </Field>
         <Field label="Batch size (cups)" error={formState.errors.batchCups?.message}>

@@ -41,7 +41,9 @@ describe.runIf(browserAvailable())('browser: a whole match on the bench', () => 
     for (const [i, colours] of POURS.entries()) {
       await page.getByRole('button', { name: 'New pour' }).click();
       const form = page.getByRole('form', { name: 'New pour' });
-      await form.getByRole('button', { name: 'Add a recipe line' }).click();
+      // The second pour starts from the first one's recipe, ready to adjust.
+      if (i === 0) await form.getByRole('button', { name: 'Add a recipe line' }).click();
+      else expect(await form.getByLabel('Line 1 colorant').inputValue()).toBe(pigment.id);
       await form.getByLabel('Line 1 colorant').selectOption(pigment.id);
       await form.getByLabel('Line 1 amount').fill(String(6 - i));
       await form.getByLabel('Batch size (cups)').fill('1');
