@@ -7,6 +7,7 @@ import { RegionsOnPhoto } from '@/components/match/regions-on-photo';
 import type { PourView } from '@/db/queries/pours';
 import type { TargetDetail } from '@/db/queries/matchDetail';
 import { swrFetcher } from '@/lib/http/client';
+import { NextPourHint } from './next-pour-hint';
 import { RecipeDiff } from './recipe-diff';
 import { ZoneReadout } from './zone-readout';
 
@@ -35,6 +36,7 @@ export function PourCompare({ pourId, previousId, target }: { pourId: string; pr
           <ZoneReadout zone={z} targetFlake={target.zones.find((t) => t.name === z.name)?.flakeCoverage ?? null} />
         </div>
       ))}
+      <NextPourHint pourId={pour.id} />
       <div className="grid gap-3 md:grid-cols-2">
         {refPhoto ? <RegionsOnPhoto photoId={refPhoto.photoId} regions={refPhoto.zones} caption="Reference" /> : null}
         {pour.photoId ? <RegionsOnPhoto photoId={pour.photoId} regions={pour.zones.map((z) => ({ name: z.name, shape: z.shape as never }))} caption={`Pour #${pour.number}`} /> : null}

@@ -30,3 +30,6 @@ export { SRGB8_TO_LINEAR, srgbToLinear } from './srgbToLinear';
 export { weightedMedian } from './weightedMedian';
 export { D50, D50_CIE15, D65, D65_CIE15, ILLUMINANT_A } from './whitePoints';
 export { xyzToLab } from './xyzToLab';
+export { solveLinear } from './solveLinear';
+export { estimateColorantEffects, type ColorantEffects, type DoseStep } from './estimateColorantEffects';
+export { suggestAdjustment, type Adjustment, type DoseLine } from './suggestAdjustment';

@@ -1,3 +1,6 @@
+// Truth by construction: every photo here is written by the test, so the colour of each pixel
+// is known; the reference conversion is culori's lab65 (srgbToLab), itself checked against the
+// IEC 61966-2-1 / CIE 15:2004 formulas and colorjs.io in lab.test.ts.
 import { describe, expect, it } from 'vitest';
 import { deltaE2000, type Lab, srgbToLab } from '@/lib/color';
 import { ImageError, measurePhoto } from '@/lib/image';

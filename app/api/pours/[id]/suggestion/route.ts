@@ -1,0 +1,20 @@
+import { and, eq } from 'drizzle-orm';
+import { db } from '@/db';
+import { matches, pours } from '@/db/schema';
+import { requireMember } from '@/lib/auth/current';
+import { json, notFound, withApi } from '@/lib/http/api';
+import { suggestNextPour } from '@/lib/matches/suggestNextPour';
+
+// The next adjustment for a pour, learnt from the team's own pour history.
+export const GET = withApi<{ id: string }>(async (_req, { params }) => {
+  const member = await requireMember();
+  const { id } = await params;
+  const row = db()
+    .select({ tolerance: matches.tolerance })
+    .from(pours)
+    .innerJoin(matches, eq(matches.id, pours.matchId))
+    .where(and(eq(pours.id, id), eq(pours.teamId, member.team.id)))
+    .get();
+  if (!row) throw notFound('No such pour in your team');
+  return json(suggestNextPour(db(), member.team.id, id, row.tolerance));
+});
