@@ -14,6 +14,7 @@ import { DeltaChart } from './delta-chart';
 import { PourCompare } from './pour-compare';
 import { PourForm } from './pour-form';
 import { PourList } from './pour-list';
+import { ArchiveControl } from './archive-control';
 import { StatusBadge } from './status-badge';
 import { TargetSampling } from './target-panel';
 import { TargetSwatches } from './target-swatches';
@@ -56,6 +57,7 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
         <div className="flex flex-wrap items-center gap-3">
           <h1 className="text-2xl font-semibold">{match.name}</h1>
           <StatusBadge status={match.status} />
+          {production.canDecide ? <ArchiveControl matchId={match.id} archived={match.status === 'archived'} onDone={() => void mutate()} /> : null}
         </div>
         <p className="mt-1 text-ink-soft">
           Zones: {match.zones.join(', ')} · tolerance {match.tolerance.toFixed(1)} ΔE00{match.notes ? ` · ${match.notes}` : ''}

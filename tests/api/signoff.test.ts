@@ -180,4 +180,29 @@ describe('sign-off: submit, approve, rework, standards', () => {
     expect((await api(`/api/matches/${matchId}/history`, { cookie: stranger.cookie })).status).toBe(404);
     expect((await api('/api/pours/no-such-pour/submit', { cookie: maker, body: {} })).status).toBe(404);
   });
+
+  it('lets a lead archive a match with its standard and reopen it; makers may not', async () => {
+    const matchId = await matchWithTarget(maker, `Archive ${uniq()}`);
+    const p1 = await pour(maker, matchId);
+    expect((await api(`/api/pours/${p1.id}/submit`, { cookie: maker, body: {} })).status).toBe(200);
+    const early = await api(`/api/matches/${matchId}/archive`, { cookie: lead, method: 'POST' });
+    expect(early.status).toBe(409);
+    expect(early.body.error.message).toMatch(/sign-off/);
+    expect((await api(`/api/pours/${p1.id}/sign-off`, { cookie: lead, body: { decision: 'approved' } })).status).toBe(200);
+    for (const who of [maker, viewer]) expect((await api(`/api/matches/${matchId}/archive`, { cookie: who, method: 'POST' })).status).toBe(403);
+    const archived = await api(`/api/matches/${matchId}/archive`, { cookie: lead, method: 'POST' });
+    expect(archived.status).toBe(200);
+    expect(archived.body.status).toBe('archived');
+    expect(archived.body.standardPourId).toBe(p1.id);
+    const photo = await uploadPhoto(maker, await twoTonePng(NEAR.back, NEAR.belly), 'batch');
+    expect((await api(`/api/matches/${matchId}/batches`, { cookie: maker, body: { photoId: photo.id, zones: ZONES, cups: 1 } })).status).toBe(409);
+    expect((await api(`/api/matches/${matchId}/pours`, { cookie: maker, body: { photoId: photo.id, recipe: [], zones: ZONES } })).status).toBe(409);
+    expect((await api('/api/standards', { cookie: maker })).body.some((s: { matchId: string }) => s.matchId === matchId)).toBe(false);
+    const reopened = await api(`/api/matches/${matchId}/reopen`, { cookie: owner, method: 'POST' });
+    expect(reopened.status).toBe(200);
+    expect(reopened.body.status).toBe('approved');
+    expect((await api(`/api/matches/${matchId}/reopen`, { cookie: owner, method: 'POST' })).status).toBe(409);
+    const stranger = await signUpShop('Archive stranger');
+    expect((await api(`/api/matches/${matchId}/archive`, { cookie: stranger.cookie, method: 'POST' })).status).toBe(404);
+  });
 });
