@@ -1,3 +1,4 @@
+import fs from 'node:fs';
 import path from 'node:path';
 import { run } from './run';
 
@@ -18,8 +19,17 @@ async function main() {
   };
   await step('type check', bin('tsc'), ['--noEmit', '-p', root]);
   await step('build (for the integration and browser tests)', bin('next'), ['build'], { NEXT_DIST_DIR: process.env.POURPROOF_TEST_DIST ?? '.next-test' });
-  await step('tests', bin('vitest'), ['run', ...process.argv.slice(2)]);
-  console.log(`\nall done in ${Math.round((Date.now() - started) / 1000)} s`);
+  const report = path.join(root, 'test-results', 'vitest.json');
+  fs.rmSync(report, { force: true });
+  console.log('\n== tests');
+  const code = await run(bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...process.argv.slice(2)]);
+  // One plain closing line that any CI reads: N passed, N failed.
+  if (fs.existsSync(report)) {
+    const r = JSON.parse(fs.readFileSync(report, 'utf8')) as { numPassedTests: number; numFailedTests: number; numPendingTests: number };
+    console.log(`\ntests: ${r.numPassedTests} passed, ${r.numFailedTests} failed, ${r.numPendingTests} skipped`);
+  }
+  console.log(`all done in ${Math.round((Date.now() - started) / 1000)} s`);
+  process.exit(code);
 }
 
 main();
