@@ -35,7 +35,10 @@ describe.runIf(browserAvailable())('browser: accept an e-mailed invitation', () 
     // The dev mailbox (API and page) shows the same message to the team.
     const mailbox = await api('/api/dev/mailbox', { cookie: owner });
     expect(mailbox.status).toBe(200);
-    expect(mailbox.body.find((m: Stored) => m.text.includes(link!))).toBeTruthy();
+    const listed = mailbox.body.find((m: { to: string; text: string }) => m.text.includes(link!));
+    expect(listed).toBeTruthy();
+    expect(listed.to).toBe(email);
+    expect(Object.keys(listed).sort()).toEqual(expect.arrayContaining(['at', 'subject', 'text', 'to']));
 
     const context = await browser().newContext({ viewport: { width: 390, height: 844 } });
     const page = await context.newPage();

@@ -3,7 +3,7 @@
 import useSWR from 'swr';
 import { swrFetcher } from '@/lib/http/client';
 
-type Message = { to: string | string[]; subject: string; text: string; html?: string; at: string | number };
+type Message = { to: string; subject: string; text: string; html?: string; at: string | number };
 
 const URL_RE = /(https?:\/\/[^\s<>"]+)/g;
 
@@ -39,7 +39,7 @@ export function MailboxList() {
               {new Date(m.at).toLocaleString()}
             </time>
           </div>
-          <p className="mt-0.5 break-all text-sm text-ink-soft">To: {Array.isArray(m.to) ? m.to.join(', ') : m.to}</p>
+          <p className="mt-0.5 break-all text-sm text-ink-soft">To: {m.to}</p>
           <p className="mt-3 whitespace-pre-wrap break-words text-sm">
             <Linked text={m.text} />
           </p>

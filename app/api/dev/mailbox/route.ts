@@ -12,6 +12,6 @@ export const GET = withApi(async () => {
   await requireMember();
   const res = await fetch(`${standIn.replace(/\/$/, '')}/messages`, { cache: 'no-store' });
   if (!res.ok) return errorResponse(502, 'mail_standin', `The mail stand-in answered ${res.status}`);
-  const messages = (await res.json()) as { to: string; subject: string; text: string; html?: string | null; at: string | number }[];
-  return json(messages.map((m) => ({ to: m.to, subject: m.subject, text: m.text, ...(m.html ? { html: m.html } : {}), at: m.at })));
+  const messages = (await res.json()) as { to: string | string[]; subject: string; text: string; html?: string | null; at: string | number }[];
+  return json(messages.map((m) => ({ to: Array.isArray(m.to) ? m.to.join(', ') : m.to, subject: m.subject, text: m.text, ...(m.html ? { html: m.html } : {}), at: m.at })));
 });
