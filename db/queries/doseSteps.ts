@@ -1,4 +1,4 @@
-import { asc, eq } from 'drizzle-orm';
+import { and, asc, eq } from 'drizzle-orm';
 import type { DoseStep } from '../../lib/color/estimateColorantEffects';
 import type { DB } from '../open';
 import { pours, recipeLines, samples } from '../schema';
@@ -20,33 +20,39 @@ export function loadDoseSteps(database: DB, teamId: string): DoseStep[] {
     .innerJoin(pours, eq(pours.id, recipeLines.pourId))
     .where(eq(pours.teamId, teamId))
     .all();
-  const labs = database
+  const labs = new Map<string, { l: number; a: number; b: number }>();
+  for (const r of database
     .select({ pourId: samples.pourId, zone: samples.zone, l: samples.l, a: samples.a, b: samples.b })
     .from(samples)
-    .where(eq(samples.teamId, teamId))
-    .all()
-    .filter((s) => s.pourId);
-  const dosesOf = (pourId: string, zone: string) => {
-    const out: Record<string, number> = {};
-    for (const l of lines) if (l.pourId === pourId && l.zone === zone) out[doseKey(l.colorantId, l.unit)] = (out[doseKey(l.colorantId, l.unit)] ?? 0) + l.amount;
-    return out;
-  };
+    .where(and(eq(samples.teamId, teamId), eq(samples.purpose, 'pour')))
+    .all()) {
+    labs.set(`${r.pourId}|${r.zone}`, r);
+  }
+  const doses = new Map<string, Record<string, number>>();
+  for (const l of lines) {
+    const at = `${l.pourId}|${l.zone}`;
+    const d = doses.get(at) ?? {};
+    d[doseKey(l.colorantId, l.unit)] = (d[doseKey(l.colorantId, l.unit)] ?? 0) + l.amount;
+    doses.set(at, d);
+  }
+  const zonesOf = (pourId: string) => [...labs.keys()].filter((k) => k.startsWith(`${pourId}|`)).map((k) => k.slice(pourId.length + 1));
   const steps: DoseStep[] = [];
   for (let i = 1; i < pourRows.length; i++) {
     const p = pourRows[i - 1]!;
     const q = pourRows[i]!;
     if (p.matchId !== q.matchId) continue;
-    for (const sq of labs.filter((s) => s.pourId === q.id)) {
-      const sp = labs.find((s) => s.pourId === p.id && s.zone === sq.zone);
+    for (const zone of zonesOf(q.id)) {
+      const sq = labs.get(`${q.id}|${zone}`)!;
+      const sp = labs.get(`${p.id}|${zone}`);
       if (!sp) continue;
-      const before = dosesOf(p.id, sq.zone);
-      const after = dosesOf(q.id, sq.zone);
-      const doses: Record<string, number> = {};
+      const before = doses.get(`${p.id}|${zone}`) ?? {};
+      const after = doses.get(`${q.id}|${zone}`) ?? {};
+      const changed: Record<string, number> = {};
       for (const k of new Set([...Object.keys(before), ...Object.keys(after)])) {
         const d = (after[k] ?? 0) - (before[k] ?? 0);
-        if (Math.abs(d) > 1e-9) doses[k] = d;
+        if (Math.abs(d) > 1e-9) changed[k] = d;
       }
-      if (Object.keys(doses).length) steps.push({ doses, moved: { l: sq.l - sp.l, a: sq.a - sp.a, b: sq.b - sp.b } });
+      if (Object.keys(changed).length) steps.push({ doses: changed, moved: { l: sq.l - sp.l, a: sq.a - sp.a, b: sq.b - sp.b } });
     }
   }
   return steps;
