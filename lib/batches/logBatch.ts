@@ -1,4 +1,4 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, isNull } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { Member } from '@/db/queries/members';
 import { batches, matches, molds, pours, samples, teams } from '@/db/schema';
@@ -45,7 +45,7 @@ export async function logBatch(database: DB, member: Member, matchId: string, in
   const missing = [...stdNames].filter((n) => !marked.has(n));
   if (missing.length) throw new ApiError(400, 'invalid_body', `zones: mark every zone of the standard (missing: ${missing.join(', ')})`);
   const mold = input.moldId
-    ? database.select().from(molds).where(and(eq(molds.id, input.moldId), eq(molds.teamId, teamId))).get()
+    ? database.select().from(molds).where(and(eq(molds.id, input.moldId), eq(molds.teamId, teamId), isNull(molds.archivedAt))).get()
     : undefined;
   if (input.moldId && !mold) throw new ApiError(400, 'invalid_body', 'moldId: no such mold in your library');
   const team = database.select({ sprue: teams.sprueAllowanceMl }).from(teams).where(eq(teams.id, teamId)).get();

@@ -1,4 +1,4 @@
-import { and, eq, inArray, max } from 'drizzle-orm';
+import { and, eq, inArray, isNull, max } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { Member } from '@/db/queries/members';
 import { colorants, matches, molds, pours, recipeLines, samples } from '@/db/schema';
@@ -28,14 +28,14 @@ export async function addPour(database: DB, member: Member, matchId: string, inp
   const colorantIds = [...new Set(input.recipe.map((l) => l.colorantId))];
   const known = new Set(
     colorantIds.length
-      ? database.select({ id: colorants.id }).from(colorants).where(and(eq(colorants.teamId, teamId), inArray(colorants.id, colorantIds))).all().map((c) => c.id)
+      ? database.select({ id: colorants.id }).from(colorants).where(and(eq(colorants.teamId, teamId), inArray(colorants.id, colorantIds), isNull(colorants.archivedAt))).all().map((c) => c.id)
       : [],
   );
   input.recipe.forEach((l, i) => {
-    if (!known.has(l.colorantId)) throw new ApiError(400, 'invalid_body', `recipe[${i}].colorantId: no such colorant in your library`);
+    if (!known.has(l.colorantId)) throw new ApiError(400, 'invalid_body', `recipe[${i}].colorantId: no such colorant in your library (or it was archived)`);
   });
-  if (input.moldId && !database.select({ id: molds.id }).from(molds).where(and(eq(molds.id, input.moldId), eq(molds.teamId, teamId))).get()) {
-    throw new ApiError(400, 'invalid_body', 'moldId: no such mold in your library');
+  if (input.moldId && !database.select({ id: molds.id }).from(molds).where(and(eq(molds.id, input.moldId), eq(molds.teamId, teamId), isNull(molds.archivedAt))).get()) {
+    throw new ApiError(400, 'invalid_body', 'moldId: no such mold in your library (or it was archived)');
   }
   if (input.correctsPourId && !database.select({ id: pours.id }).from(pours).where(and(eq(pours.id, input.correctsPourId), eq(pours.matchId, matchId))).get()) {
     throw new ApiError(400, 'invalid_body', 'correctsPourId: no such pour in this match');
