@@ -99,6 +99,15 @@ describe('colorant library API', () => {
     expect(shown.status).toBe(200);
     expect(shown.body.recipe).toEqual([expect.objectContaining({ colorantId: colorant.id, colorant: 'Pigment, ember orange', amount: 6, unit: 'drops' })]);
     expect(shown.body).toMatchObject({ moldId: mold.id, mold: 'Grub 3 in, 5 cavity' });
+
+    // A new pour cannot take the archived entries.
+    const again = { photoId: photo.id, recipe: [{ zone: 'back', colorantId: colorant.id, amount: 6, unit: 'drops' }], zones: [{ name: 'back', shape: BACK_SHAPE }] };
+    const refused = await api(`/api/matches/${match.id}/pours`, { cookie: owner, body: again });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.message).toMatch(/recipe\[0\]\.colorantId/);
+    const noMold = await api(`/api/matches/${match.id}/pours`, { cookie: owner, body: { ...again, recipe: [], moldId: mold.id } });
+    expect(noMold.status).toBe(400);
+    expect(noMold.body.error.message).toMatch(/moldId/);
   });
 
   it('answers 404 for another team\'s colorant or mold, exactly as for a missing id', async () => {
