@@ -8,7 +8,7 @@ import type { Role } from '@/db/schema';
 import { ApiError } from '@/lib/http/api';
 import { SESSION_COOKIE } from './lucia';
 import { roleAtLeast } from './roles';
-import { validateSessionToken } from './session';
+import { luciaFor, validateSessionToken } from './session';
 
 export type { Member };
 
@@ -17,8 +17,18 @@ export const getCurrentMember = cache(async (): Promise<Member | null> => {
   const jar = await cookies();
   const token = jar.get(SESSION_COOKIE)?.value;
   if (!token) return null;
-  const { user } = await validateSessionToken(db(), token);
+  const { user, fresh } = await validateSessionToken(db(), token);
   if (!user) return null;
+  if (fresh) {
+    // Lucia slid the session's expiry forward: move the cookie's with it.
+    // Server components may not set cookies; the next action or API call will.
+    const c = luciaFor(db()).createSessionCookie(token);
+    try {
+      jar.set(c.name, c.value, c.attributes);
+    } catch {
+      /* read-only cookies in a server component */
+    }
+  }
   return getMemberByUserId(db(), user.id);
 });
 

@@ -42,8 +42,14 @@ describe('sessions, passwords and roles (in-process, fresh database)', () => {
     vi.setSystemTime(new Date('2026-06-01T08:00:00Z'));
     const owner = await signUp(database, { email: 'idle@example.test', password: 'pw-long-enough', name: 'I', teamName: 'Shop I' });
     const { token } = await createUserSession(database, owner.user.id);
+    vi.setSystemTime(new Date('2026-06-02T08:00:00Z'));
+    // Early in the lifetime the session is not extended…
+    expect((await validateSessionToken(database, token)).fresh).toBe(false);
     vi.setSystemTime(new Date('2026-06-10T08:00:00Z'));
-    expect((await validateSessionToken(database, token)).user).not.toBeNull();
+    // …past half of it, it slides (and the app re-sets the cookie's expiry).
+    const mid = await validateSessionToken(database, token);
+    expect(mid.user).not.toBeNull();
+    expect(mid.fresh).toBe(true);
     // 15 days idle > the 14-day sliding lifetime.
     vi.setSystemTime(new Date('2026-06-25T08:00:01Z'));
     expect((await validateSessionToken(database, token)).user).toBeNull();
