@@ -33,7 +33,7 @@ export function AppNav({ member, devTools = false }: { member: { name: string; r
   }
   return (
     <header className="border-b border-panel-line bg-panel-deep">
-      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">
+      <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-2">
         <Link href="/matches" aria-label="Pourproof home"><Wordmark /></Link>
         <nav ref={navRef} aria-label="Main" className="order-3 -mx-1 flex w-full gap-1 overflow-x-auto sm:order-none sm:w-auto">
           {(devTools ? [...LINKS, { href: '/dev/mailbox', label: 'Mailbox' }] : LINKS).map((l) => {
@@ -43,7 +43,7 @@ export function AppNav({ member, devTools = false }: { member: { name: string; r
                 key={l.href}
                 href={l.href}
                 aria-current={active ? 'page' : undefined}
-                className={`flex min-h-tap items-center rounded-md px-3 font-medium ${active ? 'bg-white text-ink shadow-sm' : 'text-ink-soft hover:bg-white/60'}`}
+                className={`flex min-h-tap items-center whitespace-nowrap rounded-md px-2.5 font-medium ${active ? 'bg-white text-ink shadow-sm' : 'text-ink-soft hover:bg-white/60'}`}
               >
                 {l.label}
               </Link>

@@ -13,7 +13,7 @@ export function MemberRowActions({ userId, role, name, changeRole, remove }: { u
   const failed = roleState?.ok === false || removeState?.ok === false;
   return (
     <div className="flex flex-wrap items-center gap-2">
-      <form action={roleAction} className="flex items-center gap-2">
+      <form action={roleAction} className="flex flex-wrap items-center gap-2">
         <input type="hidden" name="userId" value={userId} />
         <label className="sr-only" htmlFor={`role-${userId}`}>Role of {name}</label>
         <select id={`role-${userId}`} name="role" defaultValue={role} className="min-h-tap rounded-md border border-panel-line bg-white px-2">

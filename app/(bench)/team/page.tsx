@@ -25,13 +25,15 @@ export default async function TeamPage() {
       <div className="overflow-x-auto rounded-lg border border-panel-line bg-white">
         <table className="w-full text-left text-sm" aria-label="Members">
           <thead className="bg-panel-deep">
-            <tr><th className="p-3">Name</th><th className="p-3">E-mail</th><th className="p-3">Role</th>{isOwner ? <th className="p-3">Manage</th> : null}</tr>
+            <tr><th className="p-3">Member</th><th className="p-3">Role</th>{isOwner ? <th className="p-3">Manage</th> : null}</tr>
           </thead>
           <tbody>
             {members.map((m) => (
-              <tr key={m.userId} className="border-t border-panel-line">
-                <td className="p-3 font-medium">{m.name}{m.userId === member.user.id ? ' (you)' : ''}</td>
-                <td className="p-3 break-all">{m.email}</td>
+              <tr key={m.userId} className="border-t border-panel-line align-top">
+                <td className="p-3">
+                  <span className="block font-medium">{m.name}{m.userId === member.user.id ? ' (you)' : ''}</span>
+                  <span className="block break-words text-ink-soft">{m.email}</span>
+                </td>
                 <td className="p-3">{m.role}</td>
                 {isOwner ? (
                   <td className="p-3">
