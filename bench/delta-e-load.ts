@@ -6,7 +6,7 @@ import autocannon from 'autocannon';
 import { openDatabase } from '../db/open';
 import { seedDemo } from '../db/seed-demo';
 
-export type LoadResult = { rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number };
+export type LoadResult = { rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
 
 // POST /api/delta-e under load against `next start` (production build in
 // .next, built by the caller), 10 s with 32 connections, as a signed-in member.
@@ -42,7 +42,9 @@ export async function runDeltaELoad(root: string, port = 3199, seconds = 10): Pr
       headers: { 'content-type': 'application/json', origin: base, cookie },
       body: JSON.stringify({ reference: { l: 50, a: 2.6772, b: -79.7751 }, sample: { l: 50, a: 0, b: -82.7485 }, tolerance: 2 }),
     });
+    const refusals = await timeRefusals(base, cookie);
     return {
+      refusals,
       rps: result.requests.average,
       p50: result.latency.p50,
       p975: result.latency.p97_5,
@@ -55,4 +57,32 @@ export async function runDeltaELoad(root: string, port = 3199, seconds = 10): Pr
     child.kill('SIGTERM');
     fs.rmSync(tmp, { recursive: true, force: true });
   }
+}
+
+// How long /api/measure takes to refuse bad photos (the answer should come in
+// well under 2 s, before any pixel is decoded): the slowest of three tries each.
+async function timeRefusals(base: string, cookie: string) {
+  const { hugeHeaderPng } = await import('./fixtures');
+  const regions = JSON.stringify([{ name: 'back', shape: { type: 'rect', x: 0.1, y: 0.1, w: 0.5, h: 0.5 } }]);
+  const cases: [string, Buffer][] = [
+    ['30 000 × 30 000 PNG header', await hugeHeaderPng()],
+    ['text named .jpg', Buffer.from('not a photo\n'.repeat(100))],
+  ];
+  const out: { label: string; status: number; ms: number }[] = [];
+  for (const [label, bytes] of cases) {
+    let worst = 0;
+    let status = 0;
+    for (let i = 0; i < 3; i++) {
+      const form = new FormData();
+      form.set('image', new Blob([new Uint8Array(bytes)]), 'photo.jpg');
+      form.set('regions', regions);
+      const t0 = performance.now();
+      const res = await fetch(`${base}/api/measure`, { method: 'POST', body: form, headers: { origin: base, cookie } });
+      await res.arrayBuffer();
+      worst = Math.max(worst, performance.now() - t0);
+      status = res.status;
+    }
+    out.push({ label, status, ms: worst });
+  }
+  return out;
 }

@@ -24,6 +24,8 @@ async function main() {
   const l = await runDeltaELoad(root);
   console.log(`  ${l.rps.toFixed(0)} requests/s (${l.requests} in all, ${l.non2xx} non-2xx, ${l.errors} errors)`);
   console.log(`  latency p50 ${l.p50} ms · p97.5 ${l.p975} ms · p99 ${l.p99} ms`);
+  console.log('\n== /api/measure refusing bad photos (slowest of 3; target well under 2 s)');
+  for (const r of l.refusals) console.log(`  ${r.label}: ${r.status} in ${r.ms.toFixed(0)} ms`);
 }
 
 main().catch((err) => {

@@ -38,16 +38,7 @@ export async function uploadPhoto(cookie: string, bytes: Buffer, kind: 'referenc
 
 export { api };
 
-// A 1×1 PNG whose header claims 30 000 × 30 000 pixels (CRC fixed up): a
-// decompression bomb in miniature.
-export async function hugeHeaderPng(): Promise<Buffer> {
-  const png = Buffer.from(await sharp({ create: { width: 1, height: 1, channels: 3, background: '#777777' } }).png().toBuffer());
-  png.writeUInt32BE(30000, 16);
-  png.writeUInt32BE(30000, 20);
-  const { crc32 } = await import('node:zlib');
-  png.writeUInt32BE(crc32(png.subarray(12, 29)) >>> 0, 29);
-  return png;
-}
+export { hugeHeaderPng } from '../../bench/fixtures';
 
 // An ISO BMFF 'ftyp' box with the HEIC brand, then filler: how a phone's HEIC photo starts.
 export const heicLike = () => Buffer.concat([Buffer.from('00000018667479706865696300000000686569636d696631', 'hex'), Buffer.alloc(2000, 7)]);
