@@ -12,7 +12,7 @@ import { savePhotoBytes } from '../lib/uploads/savePhoto';
 // black flake in the back and a grey card beside it, generated here, stored
 // through the upload service and measured by the real pipeline.
 const toRgb = converter('rgb');
-const rgb8 = (l: number, a: number, b: number) => {
+export const rgb8 = (l: number, a: number, b: number) => {
   const c = toRgb({ mode: 'lab65', l, a, b });
   return [c.r, c.g, c.b].map((v) => Math.max(0, Math.min(255, Math.round(v * 255)))) as [number, number, number];
 };
@@ -22,7 +22,7 @@ function rng(seed: number) {
   return () => ((s = (s * 1664525 + 1013904223) >>> 0) / 2 ** 32);
 }
 
-async function baitPhoto(back: [number, number, number], belly: [number, number, number], seed: number): Promise<Buffer> {
+export async function baitPhoto(back: [number, number, number], belly: [number, number, number], seed: number, speck: [number, number, number] | null = [22, 20, 20]): Promise<Buffer> {
   const w = 480;
   const h = 320;
   const px = Buffer.alloc(w * h * 3);
@@ -34,7 +34,7 @@ async function baitPhoto(back: [number, number, number], belly: [number, number,
       if (x >= 380 && x < 460 && y >= 120 && y < 200) c = grey;
       else if (x >= 40 && x < 340 && y >= 60 && y < 260) {
         c = y < 160 ? back : belly;
-        if (y < 160 && rand() < 0.06) c = [22, 20, 20];
+        if (speck && y < 160 && rand() < 0.06) c = speck;
       }
       const n = Math.round((rand() - 0.5) * 4);
       px[(y * w + x) * 3] = Math.max(0, Math.min(255, c[0] + n));
@@ -45,11 +45,11 @@ async function baitPhoto(back: [number, number, number], belly: [number, number,
   return sharp(px, { raw: { width: w, height: h, channels: 3 } }).jpeg({ quality: 92 }).toBuffer();
 }
 
-const ZONES = [
+export const ZONES = [
   { name: 'back', shape: { type: 'rect' as const, x: 0.125, y: 0.22, w: 0.55, h: 0.24 } },
   { name: 'belly', shape: { type: 'rect' as const, x: 0.125, y: 0.53, w: 0.55, h: 0.24 } },
 ];
-const CARD = { shape: { type: 'rect' as const, x: 0.8, y: 0.4, w: 0.15, h: 0.22 } };
+export const CARD = { shape: { type: 'rect' as const, x: 0.8, y: 0.4, w: 0.15, h: 0.22 } };
 
 // Target, then pours closing in on it, recipe changes in step.
 const TARGET = { back: rgb8(38.2, 9.5, 22.4), belly: rgb8(61.5, 12.1, 30.8) };

@@ -3,6 +3,7 @@ import path from 'node:path';
 import { openDatabase } from '../db/open';
 import { demoTeamId, seedDemo } from '../db/seed-demo';
 import { seedDemoPours } from '../db/seed-demo-pours';
+import { seedDemoStandard } from '../db/seed-demo-standard';
 import { buildIsStale } from './build-stale';
 import { run } from './run';
 import { startStandIns } from './standins';
@@ -21,7 +22,10 @@ async function main() {
   const database = openDatabase(dbFile, { migrate: true });
   const seeded = await seedDemo(database);
   const teamId = demoTeamId(database);
-  if (teamId) await seedDemoPours(database, teamId);
+  if (teamId) {
+    await seedDemoPours(database, teamId);
+    await seedDemoStandard(database, teamId, process.env.APP_URL ?? `http://localhost:${port}`);
+  }
   database.$client.close();
   console.log(seeded ? `[launch] demo shop seeded into ${dbFile}` : `[launch] using ${dbFile}`);
 

@@ -7,6 +7,7 @@ import type { TestProject } from 'vitest/node';
 import { openDatabase } from '../../db/open';
 import { demoTeamId, seedDemo } from '../../db/seed-demo';
 import { seedDemoPours } from '../../db/seed-demo-pours';
+import { seedDemoStandard } from '../../db/seed-demo-standard';
 import { startStandIns, type StandIns } from '../../scripts/standins';
 
 // Starts, once for the whole run: the local stand-ins (uploads, SMTP) and the
@@ -60,10 +61,11 @@ export default async function setup(project: TestProject) {
   const dbFile = path.join(tmp, 'app.db');
   const database = openDatabase(dbFile, { migrate: true });
   await seedDemo(database);
-  await seedDemoPours(database, demoTeamId(database)!);
-  database.$client.close();
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
+  await seedDemoPours(database, demoTeamId(database)!);
+  await seedDemoStandard(database, demoTeamId(database)!, baseUrl);
+  database.$client.close();
   child = spawn(process.execPath, [path.join(root, 'node_modules/next/dist/bin/next'), 'start', '-p', String(port), '-H', '127.0.0.1'], {
     cwd: root,
     env: {
