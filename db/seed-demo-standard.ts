@@ -19,8 +19,8 @@ const POURS = [
   { back: rgb8(72, -3.3, 6.6), belly: rgb8(83.7, -1.3, 3.8), silver: 0.375, green: 0.5 },
 ];
 const BATCHES = [
-  { back: rgb8(72.3, -3.2, 6.4), belly: rgb8(83.9, -1.2, 3.6), cups: 8, baits: 176 },
-  { back: rgb8(68.5, -2, 11), belly: rgb8(82, -0.5, 6.5), cups: 8, baits: 171 },
+  { back: rgb8(72.3, -3.2, 6.4), belly: rgb8(83.9, -1.2, 3.6), cups: 8, baits: 132 },
+  { back: rgb8(68.5, -2, 11), belly: rgb8(82, -0.5, 6.5), cups: 8, baits: 128 },
 ];
 
 export async function seedDemoStandard(database: DB, teamId: string, baseUrl: string): Promise<boolean> {
