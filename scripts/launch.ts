@@ -3,6 +3,7 @@ import path from 'node:path';
 import { openDatabase } from '../db/open';
 import { demoTeamId, seedDemo } from '../db/seed-demo';
 import { seedDemoPours } from '../db/seed-demo-pours';
+import { settleMail } from '../lib/mail/queue';
 import { seedDemoStandard } from '../db/seed-demo-standard';
 import { buildIsStale } from './build-stale';
 import { run } from './run';
@@ -26,6 +27,7 @@ async function main() {
     await seedDemoPours(database, teamId);
     await seedDemoStandard(database, teamId, process.env.APP_URL ?? `http://localhost:${port}`);
   }
+  await settleMail();
   database.$client.close();
   console.log(seeded ? `[launch] demo shop seeded into ${dbFile}` : `[launch] using ${dbFile}`);
 

@@ -1,15 +1,12 @@
 'use client';
 
-import useSWR from 'swr';
-import { Button } from '@/components/ui/button';
 import type { ColorantView } from '@/db/queries/libraries';
 import { COLORANT_KINDS } from '@/db/schema';
-import { swrFetcher } from '@/lib/http/client';
-import { ArchiveButton } from './archive-button';
 import { ColorantForm } from './colorant-form';
-import { EditorPanel, useEditor } from './editor-panel';
+import { EditorPanel } from './editor-panel';
 import { KIND_LABEL, amountOf, costPer, inches, lab } from './format';
 import { LibraryTable, RowName } from './library-table';
+import { RefreshError, RowActions, useLibrary } from './use-library';
 
 const KEY = '/api/colorants';
 const HEADERS = ['Name', 'Kind', 'Flake size and colour', 'Cost per unit', 'Stock', 'Swatch, CIELAB (D65)'];
@@ -22,36 +19,27 @@ const NUMERIC = new Set(['Flake size and colour', 'Cost per unit', 'Stock']);
 // The colorant library: everyone in the team reads it; leads and owners add,
 // edit and archive (the server checks the role again on every write).
 export function ColorantLibrary({ initial, canEdit }: { initial: ColorantView[]; canEdit: boolean }) {
-  const { data, error, mutate } = useSWR<ColorantView[]>(KEY, swrFetcher, { fallbackData: initial });
-  const rows = [...(data ?? initial)].sort(byKindThenName);
-  const editor = useEditor(rows.length === 0);
-  const editing = typeof editor.mode === 'object' ? rows.find((r) => r.id === (editor.mode as { id: string }).id) : undefined;
-  const refresh = async () => {
-    await mutate();
-  };
+  const lib = useLibrary<ColorantView>(KEY, initial);
+  const { editor, editing, refresh, savedEdit } = lib;
+  const rows = [...lib.rows].sort(byKindThenName);
 
   return (
     <div className="mt-4 space-y-4">
       {canEdit ? (
         <EditorPanel editor={editor} addLabel="Add a colorant" editTitle={editing ? `Edit “${editing.name}”` : null}>
           {editing ? (
-            <ColorantForm key={editing.id} colorant={editing} onCancel={editor.close} onSaved={async () => { await refresh(); editor.close(); }} />
+            <ColorantForm key={editing.id} colorant={editing} onCancel={editor.close} onSaved={savedEdit} />
           ) : (
             <ColorantForm onCancel={editor.close} onSaved={refresh} />
           )}
         </EditorPanel>
       ) : null}
-      {error ? <p role="alert" className="text-sm text-band-off">The list could not be refreshed: {(error as Error).message}</p> : null}
+      <RefreshError error={lib.error} />
       <LibraryTable headers={HEADERS} numeric={NUMERIC} caption="Colorant library" empty={rows.length === 0 ? (canEdit ? 'The library is empty. Add the plastisol base first, then the pigments, pearls and flakes your recipes use.' : 'The library is empty; a lead or the owner adds colorants.') : null}>
         {rows.map((c) => (
           <tr key={c.id} className="border-t border-panel-line align-top">
             <RowName name={c.name}>
-              {canEdit ? (
-                <>
-                  <Button type="button" variant="secondary" onClick={() => editor.edit(c.id)} aria-label={`Edit ${c.name}`}>Edit</Button>
-                  <ArchiveButton path={`${KEY}/${c.id}`} name={c.name} what="colorant" onArchived={refresh} />
-                </>
-              ) : null}
+              {canEdit ? <RowActions path={`${KEY}/${c.id}`} name={c.name} what="colorant" onEdit={() => editor.edit(c.id)} onArchived={refresh} /> : null}
             </RowName>
             <td className="p-3">
               {KIND_LABEL[c.kind]}

@@ -8,6 +8,14 @@ export type MailMessage = { teamId: string | null; to: string; subject: string; 
 
 const MAX_ATTEMPTS = 8;
 
+// First send attempts still running; a script waits for them before it closes
+// the database (settleMail).
+const inFlight = new Set<Promise<unknown>>();
+
+export async function settleMail(): Promise<void> {
+  while (inFlight.size) await Promise.allSettled([...inFlight]);
+}
+
 // Every message is written to the outgoing_mail table first, then sent. A
 // failed send is logged and retried with back-off; it never fails the action
 // that asked for it.
@@ -17,7 +25,10 @@ export function queueMail(database: DB, msg: MailMessage): string {
     .insert(outgoingMail)
     .values({ id, teamId: msg.teamId, to: msg.to, subject: msg.subject, text: msg.text, html: msg.html ?? null, nextAttemptAt: Date.now() })
     .run();
-  deliverOne(database, id).catch((err) => console.warn('[mail] send attempt failed', err));
+  const sending = deliverOne(database, id)
+    .catch((err) => console.warn('[mail] send attempt failed', err))
+    .finally(() => inFlight.delete(sending));
+  inFlight.add(sending);
   return id;
 }
 

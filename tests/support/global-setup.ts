@@ -7,6 +7,7 @@ import type { TestProject } from 'vitest/node';
 import { openDatabase } from '../../db/open';
 import { demoTeamId, seedDemo } from '../../db/seed-demo';
 import { seedDemoPours } from '../../db/seed-demo-pours';
+import { settleMail } from '../../lib/mail/queue';
 import { seedDemoStandard } from '../../db/seed-demo-standard';
 import { startStandIns, type StandIns } from '../../scripts/standins';
 
@@ -65,6 +66,7 @@ export default async function setup(project: TestProject) {
   const baseUrl = `http://127.0.0.1:${port}`;
   await seedDemoPours(database, demoTeamId(database)!);
   await seedDemoStandard(database, demoTeamId(database)!, baseUrl);
+  await settleMail();
   database.$client.close();
   child = spawn(process.execPath, [path.join(root, 'node_modules/next/dist/bin/next'), 'start', '-p', String(port), '-H', '127.0.0.1'], {
     cwd: root,
