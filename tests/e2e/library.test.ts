@@ -1,19 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { artifactPath, browserAvailable, signedInPage, useBrowser } from '../support/browser';
+import { artifactPath, browserAvailable, signedInPage, signedUpPage, useBrowser } from '../support/browser';
 import { baseUrl, uniqueEmail } from '../support/http';
 
 describe.runIf(browserAvailable())('browser: a new shop fills its colorant and mold libraries', () => {
   const browser = useBrowser();
 
   it('adds a pigment and a flake at 390 px, edits one, and sees them in the table', async () => {
-    const page = await (await browser().newContext({ viewport: { width: 390, height: 844 } })).newPage();
-    await page.goto(`${baseUrl()}/sign-up`);
-    await page.getByLabel('Shop name').fill('Library test shop');
-    await page.getByLabel('Your name').fill('Robin Owner');
-    await page.getByLabel('E-mail').fill(uniqueEmail('library'));
-    await page.getByLabel('Password').fill('a long password');
-    await page.getByRole('button', { name: 'Create shop' }).click();
-    await page.waitForURL(/\/matches$/);
+    const page = await signedUpPage(browser(), baseUrl(), { teamName: 'Library test shop', name: 'Robin Owner', email: uniqueEmail('library') });
 
     // An empty library opens the form straight away.
     await page.goto(`${baseUrl()}/colorants`);

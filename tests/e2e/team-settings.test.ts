@@ -1,19 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { browserAvailable, useBrowser } from '../support/browser';
+import { browserAvailable, signedUpPage, useBrowser } from '../support/browser';
 import { baseUrl, uniqueEmail } from '../support/http';
 
 describe.runIf(browserAvailable())('browser: a new shop signs up and sets its defaults', () => {
   const browser = useBrowser();
 
   it('signs up through the page, saves shop settings, and new matches take the default tolerance', async () => {
-    const page = await (await browser().newContext({ viewport: { width: 390, height: 844 } })).newPage();
-    await page.goto(`${baseUrl()}/sign-up`);
-    await page.getByLabel('Shop name').fill('Settings test shop');
-    await page.getByLabel('Your name').fill('Sam Owner');
-    await page.getByLabel('E-mail').fill(uniqueEmail('settings'));
-    await page.getByLabel('Password').fill('a long password');
-    await page.getByRole('button', { name: 'Create shop' }).click();
-    await page.waitForURL(/\/matches$/);
+    const page = await signedUpPage(browser(), baseUrl(), { teamName: 'Settings test shop', name: 'Sam Owner', email: uniqueEmail('settings') });
 
     await page.goto(`${baseUrl()}/team`);
     const form = page.getByRole('form', { name: 'Team settings' });

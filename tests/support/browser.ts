@@ -64,3 +64,16 @@ export function useBrowser(): () => Browser {
     return browser;
   };
 }
+
+// A new shop signed up through the sign-up page, at phone width by default.
+export async function signedUpPage(browser: Browser, baseUrl: string, shop: { teamName: string; name: string; email: string }, viewport = { width: 390, height: 844 }) {
+  const page = await (await browser.newContext({ viewport })).newPage();
+  await page.goto(`${baseUrl}/sign-up`);
+  await page.getByLabel('Shop name').fill(shop.teamName);
+  await page.getByLabel('Your name').fill(shop.name);
+  await page.getByLabel('E-mail').fill(shop.email);
+  await page.getByLabel('Password').fill('a long password');
+  await page.getByRole('button', { name: 'Create shop' }).click();
+  await page.waitForURL(/\/matches$/);
+  return page;
+}
