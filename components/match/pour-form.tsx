@@ -110,7 +110,14 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
         </Field>
       ) : null}
       {photo ? (
-        <PhotoSampler src={`/api/photos/${photo.photoId}/image`} width={photo.width} height={photo.height} zones={match.zones} initialShapes={initialShapes} withNeutral onChange={onShapes} />
+        <>
+          <PhotoSampler src={`/api/photos/${photo.photoId}/image`} width={photo.width} height={photo.height} zones={match.zones} initialShapes={initialShapes} withNeutral onChange={onShapes} />
+          {shapes[NEUTRAL] ? null : (
+            <p className="text-sm text-ink-soft">
+              No grey card marked: a change of light between this photo and the reference will read as a colour difference. Mark the card if it is in frame.
+            </p>
+          )}
+        </>
       ) : (
         <PhotoDropzone endpoint="pourPhoto" label="Add the photo of this pour" onUploaded={setPhoto} />
       )}

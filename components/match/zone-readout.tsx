@@ -9,6 +9,7 @@ const pct = (v: number) => `${(v * 100).toFixed(1)} %`;
 // the direction in words, flake and glare of the trial.
 export function ZoneReadout({ zone, targetFlake }: { zone: Zone; targetFlake?: number | null }) {
   const flake = zone.flake as { coverage: number } | null;
+  const light = (zone.whiteBalance as { applied?: boolean } | null)?.applied ? 'light corrected from the grey card' : 'no grey card: light not corrected';
   return (
     <div className="space-y-1 text-sm">
       <p className="flex items-baseline gap-3">
@@ -24,6 +25,7 @@ export function ZoneReadout({ zone, targetFlake }: { zone: Zone; targetFlake?: n
       <p className="num text-ink-soft">
         Flake {flake ? pct(flake.coverage) : '—'}{targetFlake === undefined || targetFlake === null ? '' : ` (target ${pct(targetFlake)})`} · glare {pct(zone.glare)} · spread {zone.spread.toFixed(1)} ΔE00
       </p>
+      <p className="text-ink-soft">Photo: {light}.</p>
     </div>
   );
 }
