@@ -1,7 +1,6 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { type Resolver, useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
@@ -9,10 +8,9 @@ import { Field, TextInput, inputClass } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
 import type { ColorantView } from '@/db/queries/libraries';
 import { COLORANT_KINDS, DOSE_UNITS } from '@/db/schema';
-import { apiFetch } from '@/lib/http/client';
 import { colorantFields, colorantSchema } from '@/lib/validations/library';
 import { KIND_OPTION, UNIT_LABEL, USUAL_UNIT, numberOrNull, perUnit } from './format';
-import { showServerError } from './server-error';
+import { useEntrySubmit } from './use-entry-submit';
 
 type Values = z.input<typeof colorantSchema>;
 type Output = z.output<typeof colorantSchema>;
@@ -38,8 +36,6 @@ const resolver: Resolver<Values, unknown, Output> = (values, ctx, opts) => valid
 const emptyValues = (kind: Values['kind'] = 'pigment'): Values => ({ name: '', kind, unit: USUAL_UNIT[kind], costPerUnit: null, stock: null, flakeSizeIn: null, flakeColor: '', swatch: undefined, notes: '' });
 
 export function ColorantForm({ colorant, onSaved, onCancel }: { colorant?: ColorantView; onSaved: (c: ColorantView) => void | Promise<void>; onCancel?: () => void }) {
-  const [error, setError] = useState<string | null>(null);
-  const [saved, setSaved] = useState<string | null>(null);
   const { register, handleSubmit, formState, watch, setValue, getFieldState, reset, setFocus, setError: setFieldError } = useForm<Values, unknown, Output>({
     resolver,
     defaultValues: colorant ? { ...colorant, flakeColor: colorant.flakeColor ?? '', notes: colorant.notes ?? '', swatch: colorant.swatch ?? undefined } : emptyValues(),
@@ -49,22 +45,18 @@ export function ColorantForm({ colorant, onSaved, onCancel }: { colorant?: Color
   const num = { setValueAs: numberOrNull };
   const err = formState.errors;
 
-  const onSubmit = handleSubmit(async (v) => {
-    setError(null);
-    setSaved(null);
-    try {
-      const path = colorant ? `/api/colorants/${colorant.id}` : '/api/colorants';
-      const row = await apiFetch<ColorantView>(path, { method: colorant ? 'PATCH' : 'POST', body: JSON.stringify(v) });
-      if (!colorant) {
-        reset(emptyValues(v.kind));
-        setFocus('name');
-        setSaved(`Added “${row.name}” to the library.`);
-      }
-      await onSaved(row);
-    } catch (e) {
-      setError(showServerError(e, setFieldError, FIELDS) || null);
-    }
+  const { error, saved, submit } = useEntrySubmit<Values, Output, ColorantView>({
+    base: '/api/colorants',
+    id: colorant?.id,
+    fields: FIELDS,
+    setFieldError,
+    onSaved,
+    afterAdd: (v) => {
+      reset(emptyValues(v.kind));
+      setFocus('name');
+    },
   });
+  const onSubmit = handleSubmit(submit);
 
   const label = colorant ? `Edit ${colorant.name}` : 'Add a colorant';
   return (

@@ -1,7 +1,6 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { type Resolver, useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
@@ -9,10 +8,9 @@ import { Field, TextInput, inputClass } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
 import type { MoldView } from '@/db/queries/libraries';
 import { THICKNESS } from '@/db/schema';
-import { apiFetch } from '@/lib/http/client';
 import { moldSchema } from '@/lib/validations/library';
 import { numberOrNull } from './format';
-import { showServerError } from './server-error';
+import { useEntrySubmit } from './use-entry-submit';
 
 type Input = z.input<typeof moldSchema>;
 type Output = z.output<typeof moldSchema>;
@@ -32,8 +30,6 @@ const THICKNESS_OPTION: Record<(typeof THICKNESS)[number], string> = {
 const emptyValues = (): Values => ({ name: '', bodyStyle: '', lengthIn: null, cavities: null, mlPerCavity: null, thickness: 'standard' });
 
 export function MoldForm({ mold, onSaved, onCancel }: { mold?: MoldView; onSaved: (m: MoldView) => void | Promise<void>; onCancel?: () => void }) {
-  const [error, setError] = useState<string | null>(null);
-  const [saved, setSaved] = useState<string | null>(null);
   const { register, handleSubmit, formState, reset, setFocus, setError: setFieldError } = useForm<Values, unknown, Output>({
     resolver,
     defaultValues: mold ?? emptyValues(),
@@ -41,22 +37,18 @@ export function MoldForm({ mold, onSaved, onCancel }: { mold?: MoldView; onSaved
   const num = { setValueAs: numberOrNull };
   const err = formState.errors;
 
-  const onSubmit = handleSubmit(async (v) => {
-    setError(null);
-    setSaved(null);
-    try {
-      const path = mold ? `/api/molds/${mold.id}` : '/api/molds';
-      const row = await apiFetch<MoldView>(path, { method: mold ? 'PATCH' : 'POST', body: JSON.stringify(v) });
-      if (!mold) {
-        reset(emptyValues());
-        setFocus('name');
-        setSaved(`Added “${row.name}” to the library.`);
-      }
-      await onSaved(row);
-    } catch (e) {
-      setError(showServerError(e, setFieldError, FIELDS) || null);
-    }
+  const { error, saved, submit } = useEntrySubmit<Values, Output, MoldView>({
+    base: '/api/molds',
+    id: mold?.id,
+    fields: FIELDS,
+    setFieldError,
+    onSaved,
+    afterAdd: (v) => {
+      reset(emptyValues());
+      setFocus('name');
+    },
   });
+  const onSubmit = handleSubmit(submit);
 
   return (
     <form onSubmit={onSubmit} noValidate aria-label={mold ? `Edit ${mold.name}` : 'Add a mold'} className="grid gap-3 sm:grid-cols-2">
