@@ -1,8 +1,9 @@
 import sharp, { type Metadata } from 'sharp';
 import { ImageError } from './imageError';
 
-export const MAX_IMAGE_BYTES = 25 * 1024 * 1024;
-export const MAX_IMAGE_PIXELS = 40_000_000;
+import { HEIC_MESSAGE, MAX_IMAGE_BYTES, MAX_IMAGE_PIXELS } from './limits';
+
+export { MAX_IMAGE_BYTES, MAX_IMAGE_PIXELS };
 export type ImageFormat = 'jpeg' | 'png' | 'webp';
 
 export interface ImageHeader {
@@ -12,17 +13,12 @@ export interface ImageHeader {
   height: number;
 }
 
-const HEIC_MESSAGE =
-  "HEIC photos can't be decoded here. Send a JPEG instead: on an iPhone, set Settings › Camera › " +
-  'Formats to "Most Compatible" before shooting, or export the photo as JPEG when you share it ' +
-  '(many phones offer "JPEG" or "Most compatible" in the share options); on Android, have the ' +
-  'camera save JPEG.';
 const TYPE_MESSAGE = "This file isn't a JPEG, PNG or WebP image we can read. Upload a JPEG, PNG or WebP photo.";
 
 // ISO/IEC 23008-12 (HEIF) files start with an ISO BMFF 'ftyp' box whose brands name the codec.
 const HEVC_BRANDS = new Set(['heic', 'heix', 'hevc', 'hevx', 'heim', 'heis', 'hevm', 'hevs']);
 const AVIF_BRANDS = new Set(['avif', 'avis']);
-function heifKind(buf: Buffer): 'heic' | 'avif' | 'heif' | null {
+export function heifKind(buf: Buffer): 'heic' | 'avif' | 'heif' | null {
   if (buf.length < 16 || buf.toString('latin1', 4, 8) !== 'ftyp') return null;
   const boxSize = Math.min(buf.readUInt32BE(0), buf.length, 256);
   const brands = [buf.toString('latin1', 8, 12)];

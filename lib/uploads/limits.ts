@@ -2,10 +2,11 @@
 // No server-only imports here: the browser shows the same limits.
 import type { PhotoKind } from '@/db/schema';
 
-/** 25 MiB: a full-size phone JPEG is well under; 12 megapixels is plenty for colour. */
-export const MAX_PHOTO_BYTES = 25 * 1024 * 1024;
-/** 40 megapixels, checked from the header before any pixel is decoded (decompression bombs). */
-export const MAX_PHOTO_PIXELS = 40_000_000;
+import { HEIC_MESSAGE, MAX_IMAGE_BYTES, MAX_IMAGE_PIXELS } from '@/lib/image/limits';
+
+export const MAX_PHOTO_BYTES = MAX_IMAGE_BYTES;
+export const MAX_PHOTO_PIXELS = MAX_IMAGE_PIXELS;
+export { HEIC_MESSAGE };
 
 export const PHOTO_FORMATS = {
   jpeg: { mime: 'image/jpeg', ext: 'jpg' },
@@ -41,5 +42,3 @@ export function formatBytes(bytes: number): string {
 
 export const TOO_LARGE_MESSAGE = `Photos may be up to ${MAX_PHOTO_BYTES / (1024 * 1024)} MB. Export a smaller JPEG — 12 megapixels is plenty for colour.`;
 export const WRONG_TYPE_MESSAGE = 'Upload a JPEG, PNG or WebP photo.';
-export const HEIC_MESSAGE =
-  "HEIC photos can't be decoded here. Export the photo as JPEG (on an iPhone: Settings › Camera › Formats › Most Compatible, or share it as JPEG) and upload that.";
