@@ -3,8 +3,9 @@ import { Lucia, TimeSpan } from 'lucia';
 import type { DB } from '@/db/open';
 import { sessions, users } from '@/db/schema';
 import { env } from '@/lib/env';
+import { SESSION_COOKIE } from './sessionCookieName';
 
-export const SESSION_COOKIE = 'pourproof_session';
+export { SESSION_COOKIE };
 
 export function secureCookies(): boolean {
   const { SECURE_COOKIES: setting, APP_URL } = env();
