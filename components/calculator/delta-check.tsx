@@ -2,7 +2,7 @@
 
 import { converter, formatHex, parse } from 'culori';
 import { useState } from 'react';
-import { BandBadge } from '@/components/color/band-badge';
+import { DeltaReadout } from '@/components/color/delta-readout';
 import { SwatchPair } from '@/components/color/swatch-pair';
 import { Button } from '@/components/ui/button';
 import { Field, TextInput } from '@/components/ui/field';
@@ -25,7 +25,6 @@ export function parseColour(text: string): Lab | null {
 }
 
 type Result = { dE00: number; dL: number; dC: number; dH: number; band: Band; withinTolerance: boolean };
-const signed = (v: number) => `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(2)}`;
 
 export function DeltaCheck({ tolerance }: { tolerance: number }) {
   const [ref, setRef] = useState('');
@@ -58,9 +57,7 @@ export function DeltaCheck({ tolerance }: { tolerance: number }) {
         <div className="grid gap-3 sm:grid-cols-2" aria-label="Difference">
           <SwatchPair left={formatHex({ mode: 'lab65', ...out.a })} right={formatHex({ mode: 'lab65', ...out.b })} leftLabel="target" rightLabel="trial" />
           <div className="space-y-1 text-sm">
-            <p className="flex items-baseline gap-3"><span className="num text-4xl font-semibold">{out.r.dE00.toFixed(2)}</span><span className="text-ink-soft">ΔE00</span><BandBadge band={out.r.band} /></p>
-            <p className="num">ΔL* {signed(out.r.dL)} · ΔC* {signed(out.r.dC)} · ΔH* {signed(out.r.dH)}</p>
-            <p className="font-medium">{describeDifference(out.a, out.b).text}</p>
+            <DeltaReadout d={out.r} direction={describeDifference(out.a, out.b).text} />
             <p className="text-ink-soft">{out.r.withinTolerance ? `Within the shop's tolerance of ${tolerance.toFixed(1)} ΔE00.` : `Outside the shop's tolerance of ${tolerance.toFixed(1)} ΔE00.`}</p>
           </div>
         </div>

@@ -2,7 +2,7 @@
 
 import Link from 'next/link';
 import { useState } from 'react';
-import { BandBadge } from '@/components/color/band-badge';
+import { DeltaReadout } from '@/components/color/delta-readout';
 import { SurroundToggle, SwatchPair, type Surround } from '@/components/color/swatch-pair';
 import { RegionsOnPhoto } from '@/components/match/regions-on-photo';
 import type { BatchView } from '@/db/queries/batches';
@@ -10,7 +10,6 @@ import type { Shape } from '@/lib/color/types';
 import { PassBadge } from './pass-badge';
 import { when } from './when';
 
-const signed = (v: number) => `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(2)}`;
 const lab = (l: { l: number; a: number; b: number }) => `L* ${l.l.toFixed(1)} a* ${l.a.toFixed(1)} b* ${l.b.toFixed(1)}`;
 
 // One production batch against its standard: pass or fail, then per zone the
@@ -50,14 +49,7 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
             <SwatchPair surround={surround} left={z.standard?.hex ?? '#777777'} right={z.hex} leftLabel={`standard #${batch.standardPourNumber}`} rightLabel="batch" />
           </div>
           <div className="space-y-1 text-sm">
-            <p className="flex flex-wrap items-baseline gap-3">
-              <span className="num text-4xl font-semibold" aria-label={`ΔE00 ${z.dE00.toFixed(2)}`}>{z.dE00.toFixed(2)}</span>
-              <span className="text-ink-soft">ΔE00</span>
-              <BandBadge band={z.band} />
-              <span className="font-medium">{z.withinTolerance ? 'within tolerance' : 'over tolerance'}</span>
-            </p>
-            <p className="num">ΔL* {signed(z.dL)} · ΔC* {signed(z.dC)} · ΔH* {signed(z.dH)}</p>
-            {z.direction ? <p className="font-medium">{z.direction.text}</p> : null}
+            <DeltaReadout d={z} direction={z.direction?.text} extra={<span className="font-medium">{z.withinTolerance ? 'within tolerance' : 'over tolerance'}</span>} />
             <p className="num text-ink-soft">Batch {lab(z.lab)}{z.standard ? ` · standard ${lab(z.standard.lab)}` : ''}</p>
           </div>
         </div>

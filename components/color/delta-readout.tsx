@@ -1,0 +1,22 @@
+import type { ReactNode } from 'react';
+import type { Band } from '@/lib/color/types';
+import { BandBadge } from './band-badge';
+
+const signed = (v: number) => `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(2)}`;
+
+// The readout beside the stage: ΔE00 large (two decimals) with its band, then
+// ΔL*, ΔC*, ΔH* (ASTM D2244 signs) and the direction in words.
+export function DeltaReadout({ d, direction, extra }: { d: { dE00: number; dL: number; dC: number; dH: number; band: Band }; direction?: string | null; extra?: ReactNode }) {
+  return (
+    <>
+      <p className="flex flex-wrap items-baseline gap-3">
+        <span className="num text-4xl font-semibold" aria-label={`ΔE00 ${d.dE00.toFixed(2)}`}>{d.dE00.toFixed(2)}</span>
+        <span className="text-ink-soft">ΔE00</span>
+        <BandBadge band={d.band} />
+        {extra}
+      </p>
+      <p className="num">ΔL* {signed(d.dL)} · ΔC* {signed(d.dC)} · ΔH* {signed(d.dH)}</p>
+      {direction ? <p className="font-medium">{direction}</p> : null}
+    </>
+  );
+}
