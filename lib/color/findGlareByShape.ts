@@ -22,6 +22,8 @@ export const GLARE_MIN_LENGTH = 12;
 /** A highlight is solid: at least this share of its pixels have all eight neighbours in it too
  * (touching specks of silver flake make spindly clusters). */
 export const GLARE_SOLID = 0.15;
+/** …and mostly blown out: at least this share of its pixels clipped in a channel. */
+export const GLARE_BLOWN = 0.5;
 /** Pixels within this distance of glare (its blurred fringe) are glare too, when lighter than the
  * region's median L* by GLARE_FRINGE_DL. */
 export const GLARE_FRINGE = 2;
@@ -31,7 +33,8 @@ export const GLARE_FRINGE_DL = 3;
  * Glare by shape: a highlight is a smooth, connected streak or blob of bright pixels, while
  * silver or white flake and pearl sparkle are many small specks. Highlight pixels (clipped
  * or washed out, and lighter than the median) are grouped into 8-connected components (labelComponents); a component at least
- * GLARE_MIN_AREA pixels in area or GLARE_MIN_LENGTH long, and solid (GLARE_SOLID), is glare, with its lighter neighbours up to
+ * GLARE_MIN_AREA pixels in area or GLARE_MIN_LENGTH long, solid (GLARE_SOLID) and mostly clipped (GLARE_BLOWN), is
+ * glare, with its lighter neighbours up to
  * GLARE_FRINGE pixels away (the lens spreads the highlight into them). Smaller specks stay flake. When more than GLARE_MAX_SHARE of the region
  * would be glare (a white bait, a blown-out photo), nothing is: the majority is the colour.
  * Returns 1 per sampled pixel (in `cell` order) for glare.
@@ -62,12 +65,14 @@ export function findGlareByShape(rp: RegionPixels): Uint8Array {
   const { labels, area, box } = labelComponents(mask, gridW, gridH);
   const inner = boxMorphology(mask, gridW, gridH, 1, 'erode');
   const solid = new Array<number>(area.length).fill(0);
+  const blown = new Array<number>(area.length).fill(0);
   for (let c = 0; c < inner.length; c++) if (inner[c]) solid[labels[c] - 1]++;
+  for (let i = 0; i < n; i++) if (clipped[sample[i]] && labels[cell[i]]) blown[labels[cell[i]] - 1]++;
   const isGlare = area.map((a, k) => {
     const [x0, y0, x1, y1] = box[k];
     const length = Math.hypot(x1 - x0 + 1, y1 - y0 + 1) * step;
     const big = a * step * step >= GLARE_MIN_AREA || length >= GLARE_MIN_LENGTH;
-    return big && (step > 1 || solid[k] >= GLARE_SOLID * a);
+    return big && blown[k] >= GLARE_BLOWN * a && (step > 1 || solid[k] >= GLARE_SOLID * a);
   });
   if (!isGlare.some(Boolean)) return glare;
   const core = new Uint8Array(gridW * gridH);

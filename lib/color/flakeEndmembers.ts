@@ -44,11 +44,12 @@ export function flakeEndmembers(groups: Lab[], fl: Float64Array, idx: Int32Array
     // The mean colour of the pixels beyond the quantile: observed colours, not an extrapolation.
     const from = Math.min(t.length - 1, Math.floor(ENDMEMBER_QUANTILE * t.length));
     const e: Vec3 = [0, 0, 0];
-    for (let k = from; k < t.length; k++) {
+    const to = t.length;
+    for (let k = from; k < to; k++) {
       const j = t[k][1];
       e[0] += xyz[j]; e[1] += xyz[j + 1]; e[2] += xyz[j + 2];
     }
-    const m = t.length - from;
+    const m = to - from;
     if (m > 0 && t[from][0] >= 1) for (let c = 0; c < 3; c++) e[c] = Math.max(0, e[c] / m);
     else e.splice(0, 3, ...dirs[q].map((v, c) => bx[c] + v)); // the group mean when its core is no purer
     labInto(e[0], e[1], e[2], out, 0);

@@ -1,14 +1,15 @@
 import { differenceCiede2000 } from 'culori';
 import type { ColorSamples, Lab, RegionMeasure, Vec3 } from './types';
-import { boxMorphology } from './boxMorphology';
 import { clusterFlake } from './clusterFlake';
 import { findGlareByShape } from './findGlareByShape';
 import { findOtherColour } from './findOtherColour';
-import { fitShading } from './fitShading';
+import { cie94Distances } from './cie94Distances';
+import { correctShading } from './correctShading';
 import { flakeEndmembers } from './flakeEndmembers';
 import { labToHex } from './labToHex';
 import { labInto, type RegionPixels } from './regionPixels';
 import { regionUncertainty } from './regionUncertainty';
+import { trulyBase } from './trulyBase';
 import { unmixCoverage } from './unmixCoverage';
 import { weightedMedian } from './weightedMedian';
 
@@ -17,14 +18,12 @@ import { weightedMedian } from './weightedMedian';
 export const KEEP_FACTOR = 3;
 export const KEEP_MIN = 4;
 export const KEEP_MAX = 12;
-const MAX_ITERATIONS = 10;
-const CONVERGED = 1e-3; // ΔE*ab: far below anything visible or reported
+const MAX_ITERATIONS = 8;
+const CONVERGED = 0.01; // ΔE*ab: far below anything visible or reported
 /** Flake samples farther than this many keep-thresholds from the base are whole flake (core). */
 export const FLAKE_CORE = 2;
 /** Spread is exact up to this many kept pixels, else estimated from an even subset. */
-export const SPREAD_SAMPLE = 4000;
-/** A fitted fall-off smaller than this (L*) is noise: the region counts as evenly lit. */
-export const SHADING_MIN = 1;
+export const SPREAD_SAMPLE = 1500;
 
 const ciede2000 = differenceCiede2000(1, 1, 1);
 
@@ -90,7 +89,7 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
   // Base: iterate the mean of the pixels near the estimate.
   const dist = new Float32Array(n);
   let base = med;
-  distances(lab, base, dist);
+  cie94Distances(lab, base, dist);
   const keepWithin = Math.min(KEEP_MAX, Math.max(KEEP_MIN, KEEP_FACTOR * medianOf(dist, glare)));
   const kept = new Uint8Array(n);
   for (let round = 0; round < MAX_ITERATIONS; round++) {
@@ -109,7 +108,7 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
     const next = { l: sl / w, a: sa / w, b: sb / w };
     const moved = Math.hypot(next.l - base.l, next.a - base.a, next.b - base.b);
     base = next;
-    distances(lab, base, dist);
+    cie94Distances(lab, base, dist);
     if (moved < CONVERGED) break;
   }
 
@@ -179,91 +178,6 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
   };
 }
 
-/** Noise is estimated from pixels this many cells apart (JPEG shares chroma between neighbours). */
-const NOISE_LAG = 2;
-/** The mode is sought with a window of this many noise σ (and at least MODE_MIN, ΔE94). */
-const MODE_SIGMAS = 2;
-const MODE_MIN = 1;
-/** Lower quartile of the χ distribution with 3 degrees of freedom (radius of a 3-D standard normal). */
-const CHI3_Q25 = 1.1012;
-
-// The base colour from the pixels that are truly base. Fine specks, blurred by the lens and
-// smeared by JPEG's half-resolution chroma, tint many pixels a little: their colours skew the
-// kept set toward the flake. So: (1) the noise σ from differences of kept pixels NOISE_LAG apart
-// (lower quartile of their distance / (1.102·√2): the lower quartile of a 3-D normal's radius
-// is 1.102 σ, the χ distribution with 3 degrees of freedom; the lower quartile, as pairs with a
-// speck's rim in them sit in the upper part); (2) mean shift
-// with a flat window of MODE_SIGMAS σ from the estimate to the mode of the kept colours
-// (K. Fukunaga & L. Hostetler, IEEE Trans. Inf. Theory 21(1), 1975); (3) of the pixels inside
-// that window, those with none outside it (glare aside) within `radius` cells; their mean in
-// linear light is the base (all inside the window when too few are left).
-function trulyBase(lab: Float32Array, xyz: Float32Array, kept: Uint8Array, glare: Uint8Array, cell: Int32Array, gridW: number, gridH: number, start: Lab, keepWithin: number, radius: number): { xyz: Vec3; count: number } {
-  const n = kept.length;
-  const at = new Int32Array(gridW * gridH).fill(-1);
-  for (let i = 0; i < n; i++) at[cell[i]] = i;
-  const diffs: number[] = [];
-  for (let i = 0; i < n; i += 1) {
-    if (!kept[i] || cell[i] % gridW >= gridW - NOISE_LAG) continue;
-    const j = at[cell[i] + NOISE_LAG];
-    if (j < 0 || !kept[j]) continue;
-    diffs.push(Math.hypot(lab[i * 3] - lab[j * 3], lab[i * 3 + 1] - lab[j * 3 + 1], lab[i * 3 + 2] - lab[j * 3 + 2]));
-  }
-  diffs.sort((x, y) => x - y);
-  const sigma = diffs.length ? diffs[Math.floor(diffs.length / 4)] / (CHI3_Q25 * Math.SQRT2) : keepWithin / MODE_SIGMAS;
-  const window = Math.min(keepWithin, Math.max(MODE_MIN, MODE_SIGMAS * sigma));
-  const dist = new Float32Array(n);
-  let centre = start;
-  const near = new Uint8Array(n);
-  for (let round = 0; round < 20; round++) {
-    distances(lab, centre, dist);
-    let sl = 0, sa = 0, sb = 0, w = 0;
-    for (let i = 0; i < n; i++) {
-      near[i] = !glare[i] && dist[i] <= window ? 1 : 0;
-      if (!near[i]) continue;
-      w++;
-      sl += lab[i * 3]; sa += lab[i * 3 + 1]; sb += lab[i * 3 + 2];
-    }
-    if (w === 0) {
-      near.set(kept);
-      break;
-    }
-    const next = { l: sl / w, a: sa / w, b: sb / w };
-    const moved = Math.hypot(next.l - centre.l, next.a - centre.a, next.b - centre.b);
-    centre = next;
-    if (moved < CONVERGED) break;
-  }
-  const outside = new Uint8Array(gridW * gridH);
-  for (let i = 0; i < n; i++) if (!near[i] && !glare[i]) outside[cell[i]] = 1;
-  const close = boxMorphology(outside, gridW, gridH, radius, 'dilate');
-  let nearCount = 0, pure = 0;
-  for (let i = 0; i < n; i++) {
-    nearCount += near[i];
-    if (near[i] && !close[cell[i]]) pure++;
-  }
-  const usePure = pure >= Math.max(30, 0.02 * nearCount);
-  const bx: Vec3 = [0, 0, 0];
-  let count = 0;
-  for (let i = 0; i < n; i++) {
-    if (!near[i] || (usePure && close[cell[i]])) continue;
-    count++;
-    bx[0] += xyz[i * 3]; bx[1] += xyz[i * 3 + 1]; bx[2] += xyz[i * 3 + 2];
-  }
-  return { xyz: [bx[0] / count, bx[1] / count, bx[2] / count], count };
-}
-
-// CIE 116-1995 (CIE94): ΔE94 = sqrt(ΔL² + (ΔC / S_C)² + (ΔH / S_H)²), S_C = 1 + 0.045·C*ref,
-// S_H = 1 + 0.015·C*ref, ΔH² = Δa² + Δb² − ΔC².
-function distances(lab: Float32Array, ref: Lab, dist: Float32Array) {
-  const cRef = Math.hypot(ref.a, ref.b);
-  const sc = 1 + 0.045 * cRef, sh = 1 + 0.015 * cRef;
-  for (let i = 0, j = 0; i < dist.length; i++, j += 3) {
-    const dl = lab[j] - ref.l, da = lab[j + 1] - ref.a, db = lab[j + 2] - ref.b;
-    const dc = Math.sqrt(lab[j + 1] * lab[j + 1] + lab[j + 2] * lab[j + 2]) - cRef;
-    const dh2 = Math.max(0, da * da + db * db - dc * dc);
-    dist[i] = Math.sqrt(dl * dl + (dc / sc) * (dc / sc) + dh2 / (sh * sh));
-  }
-}
-
 // Median of v over the pixels not excluded, from a histogram of 0.01 bins (exact enough for a threshold).
 function medianOf(v: Float32Array, exclude: Uint8Array): number {
   const bins = new Uint32Array(20001);
@@ -289,40 +203,4 @@ function spreadOf(lab: Float32Array, kept: Uint8Array, base: Lab, keptCount: num
   }
   de.sort((x, y) => x - y);
   return de.length ? de[Math.floor((de.length - 1) / 2)] : 0;
-}
-
-// The fall-off: fit L* on the pixels of about the base's hue (flake of another hue stays out),
-// then scale each pixel's XYZ by Y(mean) / Y(fit) and recompute its Lab. Returns the L* range.
-function correctShading(lab: Float32Array, xyz: Float32Array, cx: Int32Array, cy: Int32Array, glare: Uint8Array, med: Lab, gridW: number, gridH: number): number {
-  const n = glare.length;
-  const L = new Float64Array(n);
-  const include = new Uint8Array(n);
-  const chromaGate = 6 + 0.25 * Math.hypot(med.a, med.b);
-  for (let i = 0; i < n; i++) {
-    L[i] = lab[i * 3];
-    include[i] = !glare[i] && Math.hypot(lab[i * 3 + 1] - med.a, lab[i * 3 + 2] - med.b) <= chromaGate ? 1 : 0;
-  }
-  const fit = fitShading(L, cx, cy, include, gridW, gridH);
-  if (!fit) return 0;
-  const fitted = new Float64Array(n);
-  let lo = Infinity, hi = -Infinity, ySum = 0, m = 0;
-  for (let i = 0; i < n; i++) {
-    const f = fit.at(cx[i], cy[i]);
-    const t = (Math.max(0, f) + 16) / 116;
-    fitted[i] = t * t * t;
-    if (glare[i]) continue;
-    if (f < lo) lo = f;
-    if (f > hi) hi = f;
-    ySum += fitted[i];
-    m++;
-  }
-  const range = hi - lo;
-  if (!(range >= SHADING_MIN) || m === 0) return 0;
-  const yMean = ySum / m;
-  for (let i = 0, j = 0; i < n; i++, j += 3) {
-    const k = yMean / fitted[i];
-    xyz[j] *= k; xyz[j + 1] *= k; xyz[j + 2] *= k;
-    labInto(xyz[j], xyz[j + 1], xyz[j + 2], lab, j);
-  }
-  return range;
 }

@@ -14,8 +14,9 @@ export const U_PER_SHADING = 0.03;
 export const U_PER_FLAKE = 0.02;
 /** When a second colour was cut out of the region. */
 export const U_OTHER = 0.2;
-/** Per ΔE00 of the card's cast: adapting the light is a model (see correctWhiteBalance). */
-export const U_PER_CAST = 0.06;
+/** Per ΔE00 of the card's cast: adapting the light is a model (see correctWhiteBalance); a channel
+ * cast corrected as Bradford is left off by up to about half the card's cast. */
+export const U_PER_CAST = 0.2;
 /** Neighbouring pixels are not independent after demosaicing, blur and JPEG: count one in this many. */
 export const CORRELATED_PIXELS = 9;
 /** Coverage factor for about 95 % (JCGM 100:2008 §6.2–6.3). */

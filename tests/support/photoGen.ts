@@ -72,6 +72,12 @@ export function castMatrix(light: Light, kind: 'channel' | 'bradford'): M3 {
   return mm(inv(SRGB_XYZ), mm(inv(BFD), mm(k, mm(BFD, SRGB_XYZ))));
 }
 
+/** "Normal exposure" under a cast: the camera meters so that white under that light just does not clip. */
+export function meteredExposure(light: Light, kind: 'channel' | 'bradford'): number {
+  const w = mul(castMatrix(light, kind), [1, 1, 1]);
+  return 1 / Math.max(...w);
+}
+
 export interface PhotoSpec {
   seed: number;
   width?: number;
