@@ -28,8 +28,8 @@ export const SPREAD_SAMPLE = 1500;
 const ciede2000 = differenceCiede2000(1, 1, 1);
 
 export interface RegionContext {
-  /** The file was lossy (JPEG, lossy WebP). */
-  lossy?: boolean;
+  /** How coarse the file's lossy compression was: 0 lossless, ≈ 0.2 JPEG q90, ≈ 0.5 q75 (jpegQuantScale). */
+  compression?: number;
   /** ΔE00 of the grey card's cast before correction (0 or absent without a card). */
   cast?: number;
 }
@@ -121,7 +121,7 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
   // Truly base: near the mode of the base colours, and with nothing else close by.
   let keptCount = 0;
   for (let i = 0; i < n; i++) keptCount += kept[i];
-  const { xyz: bx, count: nb } = trulyBase(lab, xyz, kept, glare, cell, gridW, gridH, base, keepWithin, ctx.lossy ? 2 : 1);
+  const { xyz: bx, count: nb } = trulyBase(lab, xyz, kept, glare, cell, gridW, gridH, base, keepWithin, (ctx.compression ?? 0) > 0 ? 2 : 1);
   const out = new Float64Array(3);
   labInto(bx[0], bx[1], bx[2], out, 0);
   base = { l: out[0], a: out[1], b: out[2] };
@@ -172,7 +172,7 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
     spread,
     glare: glareCount / n,
     flake,
-    uncertainty: regionUncertainty({ spread, basePixels: nb * step * step, lossy: !!ctx.lossy, shading, coverage, flake: flake.groups.map((g) => g.lab), base, other: otherOut?.share ?? 0, cast: ctx.cast ?? 0 }),
+    uncertainty: regionUncertainty({ spread, basePixels: nb * step * step, compression: ctx.compression ?? 0, shading, coverage, flake: flake.groups.map((g) => g.lab), base, other: otherOut?.share ?? 0, cast: ctx.cast ?? 0 }),
     shading,
     other: otherOut,
   };

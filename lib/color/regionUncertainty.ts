@@ -5,13 +5,16 @@ import { deltaE2000 } from './deltaE2000';
 // photo's own scatter. Ours: set on the synthetic photos of tests/support/photoGen.ts so that the
 // expanded uncertainty holds the true error for at least 90 % of regions
 // (tests/color/uncertainty.test.ts); revisit them when real bench photos with a measured truth exist.
-/** 8-bit quantisation and the file's encoding: lossless, and lossy (JPEG 4:2:0 chroma, quantisation). */
+/** 8-bit quantisation and the file's encoding: lossless, and per unit of JPEG quantisation scale
+ * (jpegQuantScale: ≈ 0.2 at q90, ≈ 0.5 at q75), for 4:2:0 chroma and quantisation. */
 export const U_LOSSLESS = 0.08;
-export const U_LOSSY = 0.25;
+export const U_PER_COMPRESSION = 1.2;
 /** Per L* of fitted fall-off: the quadratic never follows the light exactly. */
 export const U_PER_SHADING = 0.03;
-/** Per unit coverage × ΔE00 from base to flake: blended rims left in the base. */
+/** Per unit coverage × ΔE00 from base to flake: blended rims left in the base; grows with the
+ * compression (JPEG smears the flake's chroma into the base). */
 export const U_PER_FLAKE = 0.02;
+export const U_PER_FLAKE_COMPRESSED = 0.12;
 /** When a second colour was cut out of the region. */
 export const U_OTHER = 0.2;
 /** Per ΔE00 of the card's cast: adapting the light is a model (see correctWhiteBalance); a channel
@@ -27,7 +30,8 @@ export interface UncertaintyInputs {
   spread: number;
   /** Pixels the base was averaged from. */
   basePixels: number;
-  lossy: boolean;
+  /** 0 lossless, else the JPEG quantisation scale. */
+  compression: number;
   shading: number;
   coverage: number;
   flake: Lab[];
@@ -50,9 +54,9 @@ export function regionUncertainty(x: UncertaintyInputs): number {
   const flakeDistance = x.flake.reduce((m, f) => Math.max(m, deltaE2000(x.base, f)), 0);
   const parts = [
     scatter,
-    x.lossy ? U_LOSSY : U_LOSSLESS,
+    Math.hypot(U_LOSSLESS, U_PER_COMPRESSION * x.compression),
     U_PER_SHADING * x.shading,
-    U_PER_FLAKE * x.coverage * flakeDistance,
+    (U_PER_FLAKE + U_PER_FLAKE_COMPRESSED * x.compression) * x.coverage * flakeDistance,
     x.other > 0 ? U_OTHER : 0,
     U_PER_CAST * x.cast,
   ];

@@ -19,6 +19,7 @@ import {
 import { decodeImage } from './decodeImage';
 import { ImageError } from './imageError';
 import { inspectImage } from './inspectImage';
+import { jpegQuantScale } from './jpegQuantScale';
 
 export interface PhotoRegion {
   name: string;
@@ -139,14 +140,15 @@ export async function measurePhoto(
     };
   }
 
-  const lossy = header.format !== 'png';
+  // JPEG: how coarse its quantisation was (jpegQuantScale); WebP may be lossy: counted as a mid JPEG.
+  const compression = header.format === 'png' ? 0 : header.format === 'jpeg' ? (jpegQuantScale(buf) ?? 0.5) : 0.5;
   return {
     width,
     height,
     whiteBalance,
     regions: regions.map((r, i) => ({
       name: r.name,
-      ...measureRegion(sampleRegion(window, spans[i], toXyz, profile, maxSamples), { lossy, cast: whiteBalance.cast }),
+      ...measureRegion(sampleRegion(window, spans[i], toXyz, profile, maxSamples), { compression, cast: whiteBalance.cast }),
     })),
   };
 }
