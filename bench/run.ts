@@ -1,6 +1,6 @@
 import path from 'node:path';
+import { buildApp } from '../scripts/build-app';
 import { buildIsStale } from '../scripts/build-stale';
-import { run } from '../scripts/run';
 import { runDeltaELoad } from './delta-e-load';
 import { runMeasureBench } from './measure';
 
@@ -17,7 +17,7 @@ async function main() {
 
   if (buildIsStale(root)) {
     console.log('\n== building the app for the load test');
-    const code = await run(path.join(root, 'node_modules/.bin/next'), ['build']);
+    const code = await buildApp(root, '.next');
     if (code !== 0) process.exit(code);
   }
   console.log('\n== POST /api/delta-e under load (autocannon, 10 s, 32 connections, next start)');
