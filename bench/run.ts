@@ -26,6 +26,10 @@ async function main() {
   console.log(`  latency p50 ${l.p50} ms · p97.5 ${l.p975} ms · p99 ${l.p99} ms`);
   console.log('\n== /api/measure refusing bad photos (slowest of 3; target well under 2 s)');
   for (const r of l.refusals) console.log(`  ${r.label}: ${r.status} in ${r.ms.toFixed(0)} ms`);
+  const h = l.health;
+  console.log('\n== /api/health while six heavy measurements run (20 MP JPEG, 16 outlines each, three members × two)');
+  console.log(`  measurements answered ${h.statuses.join(', ')} in ${h.measureMs.toFixed(0)} ms`);
+  console.log(`  health: ${h.healthCount} answers, p50 ${h.healthP50.toFixed(1)} ms, p95 ${h.healthP95.toFixed(1)} ms, max ${h.healthMax.toFixed(1)} ms (goal: every answer ≤ 100 ms)`);
 }
 
 main().catch((err) => {

@@ -11,7 +11,9 @@ import { assertWorkBudget } from './workBudget';
 
 const g = globalThis as unknown as { pourproofMeasurePool?: Piscina<MeasureTask, MeasureReply> | null };
 
-// One pool per server process, a thread per core. Outside the app server
+// One pool per server process: a thread per core but one, so the request
+// thread keeps a core to answer everyone else while photos are measured (on a
+// single core, one worker). Outside the app server
 // (scripts, unit tests) or without the bundle, photos are measured in-process.
 function pool(): Piscina<MeasureTask, MeasureReply> | null {
   if (g.pourproofMeasurePool !== undefined) return g.pourproofMeasurePool;
@@ -21,7 +23,7 @@ function pool(): Piscina<MeasureTask, MeasureReply> | null {
     g.pourproofMeasurePool = null;
     return null;
   }
-  g.pourproofMeasurePool = new Piscina<MeasureTask, MeasureReply>({ filename: file, maxThreads: Math.max(1, os.availableParallelism()), minThreads: 1, idleTimeout: 60_000 });
+  g.pourproofMeasurePool = new Piscina<MeasureTask, MeasureReply>({ filename: file, maxThreads: Math.max(1, os.availableParallelism() - 1), minThreads: 1, idleTimeout: 60_000 });
   return g.pourproofMeasurePool;
 }
 
@@ -35,7 +37,11 @@ export async function measureOffThread(bytes: Buffer, regions: PhotoRegion[], ne
   assertWorkBudget([...regions.map((r) => r.shape), ...(neutral ? [neutral.shape] : [])], header.width, header.height);
   const workers = pool();
   if (!workers) return measurePhoto(bytes, regions, neutral);
-  const reply = await workers.run({ bytes: new Uint8Array(bytes.buffer, bytes.byteOffset, bytes.byteLength), regions, neutral });
+  // The bytes are moved to the worker, not copied: a copy of their own first,
+  // since a Buffer may share its memory with Node's pool.
+  const own = new Uint8Array(bytes.byteLength);
+  own.set(bytes);
+  const reply = await workers.run({ bytes: own, regions, neutral }, { transferList: [own.buffer] });
   if (!reply.ok) throw new ImageError(reply.kind, reply.message);
   return reply.result;
 }

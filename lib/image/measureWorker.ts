@@ -3,8 +3,12 @@
 // decoding, the Lab conversion and the statistics never hold up the request
 // thread. Errors a maker can act on travel back as data (classes do not cross
 // threads); anything else rejects the task.
+import sharp from 'sharp';
 import { ImageError, type ImageErrorKind } from './imageError';
 import { measurePhoto, type NeutralPatch, type PhotoMeasure, type PhotoRegion } from './measurePhoto';
+
+// One libvips thread per worker: the pool already runs a worker per spare core.
+sharp.concurrency(1);
 
 export type MeasureTask = { bytes: Uint8Array; regions: PhotoRegion[]; neutral?: NeutralPatch };
 export type MeasureReply = { ok: true; result: PhotoMeasure } | { ok: false; kind: ImageErrorKind; message: string };
