@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { backupDatabase, listBackups } from '../../lib/backup/backupDatabase';
 import { restoreDatabase } from '../../lib/backup/restoreDatabase';
 import { isBuilt, startApp } from '../support/app-process';
-import { drillDir, matchIdsIn, signUpOn, startWriters } from '../support/drills';
+import { drillDir, matchIdsIn, signUpOn, startWriters, untilAcked } from '../support/drills';
 
 // The restore drill: a backup taken while writes run, restored into a fresh
 // file, and the app started on it serves the same data the copy holds.
@@ -17,7 +17,7 @@ describe.skipIf(!isBuilt())('backup and restore drill', () => {
       const app = await startApp({ dbFile: live });
       const cookie = await signUpOn(app.baseUrl, 'drill@restore.test');
       const writers = startWriters(app.baseUrl, cookie);
-      await new Promise((r) => setTimeout(r, 700));
+      await untilAcked(writers, 5);
       const ackedBefore = [...writers.acked];
       const { folder, manifest } = await backupDatabase({ dbFile: live, backupDir: backups, keep: 2 });
       await new Promise((r) => setTimeout(r, 300));

@@ -48,6 +48,15 @@ export function startWriters(base: string, cookie: string, clients = 4): Writer 
   };
 }
 
+/** Waits until the writers have `n` acknowledged writes (a loaded machine starts slowly). */
+export async function untilAcked(w: Writer, n: number, timeoutMs = 30_000) {
+  const until = Date.now() + timeoutMs;
+  while (w.acked.length < n) {
+    if (Date.now() > until) throw new Error(`only ${w.acked.length} writes acknowledged in ${timeoutMs} ms`);
+    await new Promise((r) => setTimeout(r, 20));
+  }
+}
+
 export function matchIdsIn(dbFile: string): Set<string> {
   const db = new Database(dbFile, { readonly: true, fileMustExist: true });
   try {
@@ -68,6 +77,7 @@ export async function crashOnce(dbFile: string, env: Record<string, string> = {}
   let app: AppProcess | undefined = await startApp({ dbFile, env });
   const cookie = await signUpOn(app.baseUrl, 'drill@crash.test');
   const writers = startWriters(app.baseUrl, cookie);
+  await untilAcked(writers, 3);
   await new Promise((r) => setTimeout(r, writeMs));
   await app.stop('SIGKILL');
   await writers.stop();
