@@ -22,7 +22,10 @@ export function flakeEndmembers(groups: Lab[], fl: Float64Array, idx: Int32Array
     let best = 0, bestD = Infinity;
     for (let g = 0; g < k; g++) {
       const d = (fl[p * 3] - groups[g].l) ** 2 + (fl[p * 3 + 1] - groups[g].a) ** 2 + (fl[p * 3 + 2] - groups[g].b) ** 2;
-      if (d < bestD) (bestD = d), (best = g);
+      if (d < bestD) {
+        bestD = d;
+        best = g;
+      }
     }
     assign[p] = best;
     const j = idx[p] * 3;

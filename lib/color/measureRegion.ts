@@ -63,7 +63,11 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
     if (glare[i]) glareCount++;
     else live[sample[i]]++;
   }
-  if (glareCount === n) glare.fill(0), (glareCount = 0), live.set(samples.counts);
+  if (glareCount === n) {
+    glare.fill(0);
+    glareCount = 0;
+    live.set(samples.counts);
+  }
   const sLab = samples.lab;
   const med: Lab = {
     l: weightedMedian(sLab, live, -1, 110, 0.05, undefined, 3, 0),

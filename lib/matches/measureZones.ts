@@ -3,7 +3,8 @@ import type { DB } from '@/db/open';
 import { photos } from '@/db/schema';
 import { compareLab, type Lab, type RegionMeasure, type Shape } from '@/lib/color';
 import { ApiError } from '@/lib/http/api';
-import { ImageError, measurePhoto, type NeutralPatch, type PhotoMeasure } from '@/lib/image';
+import { ImageError, type NeutralPatch, type PhotoMeasure } from '@/lib/image';
+import { measureOffThread } from '@/lib/image/measurePool';
 import { fetchStoredBytes } from '@/lib/uploads/service';
 
 export interface ZoneToMeasure {
@@ -31,7 +32,7 @@ export async function measureZones(database: DB, teamId: string, photoId: string
   ];
   let measured: PhotoMeasure;
   try {
-    measured = await measurePhoto(bytes, regions, neutral);
+    measured = await measureOffThread(bytes, regions, neutral);
   } catch (err) {
     if (err instanceof ImageError) throw new ApiError(err.status, err.kind, err.message.replace(REF, 'the reference of '));
     throw err;
