@@ -10,8 +10,8 @@ export function DeltaReadout({ d, direction, extra, uncertainty }: { d: { dE00: 
   return (
     <>
       <p className="flex flex-wrap items-baseline gap-3">
-        <span className="num text-4xl font-semibold" aria-label={`ΔE00 ${d.dE00.toFixed(2)}${uncertainty ? ` plus or minus ${uncertainty.toFixed(2)}` : ''}`}>{d.dE00.toFixed(2)}</span>
-        {uncertainty ? <span className="num text-xl text-ink-soft" title="About 95 % sure the true difference lies within this">± {uncertainty.toFixed(2)}</span> : null}
+        <span className="num text-4xl font-semibold" aria-label={`ΔE00 ${d.dE00.toFixed(2)}`}>{d.dE00.toFixed(2)}</span>
+        {uncertainty ? <span className="num text-xl text-ink-soft" aria-label={`plus or minus ${uncertainty.toFixed(2)}`} title="About 95 % sure the true difference lies within this">± {uncertainty.toFixed(2)}</span> : null}
         <span className="text-ink-soft">ΔE00</span>
         <BandBadge band={d.band} />
         {extra}

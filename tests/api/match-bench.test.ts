@@ -131,7 +131,7 @@ describe('match bench API: target, numbered pours, ΔE00 per zone', () => {
       expectErrorShape(res.body);
       expect(res.body.error.message).toMatch(field);
     }
-    expect((await api(`/api/matches/${matchId}`, { cookie: maker })).body.pours).toHaveLength(2);
+    expect((await api(`/api/matches/${matchId}`, { cookie: maker })).body.pours).toHaveLength(3);
   });
 });
 
