@@ -8,7 +8,7 @@ import { deltaE2000 } from './deltaE2000';
 /** 8-bit quantisation and the file's encoding: lossless, and per unit of JPEG quantisation scale
  * (jpegQuantScale: ≈ 0.2 at q90, ≈ 0.5 at q75), for 4:2:0 chroma and quantisation. */
 export const U_LOSSLESS = 0.08;
-export const U_PER_COMPRESSION = 1.2;
+export const U_PER_COMPRESSION = 0.9;
 /** Per L* of fitted fall-off: the quadratic never follows the light exactly. */
 export const U_PER_SHADING = 0.03;
 /** Per unit coverage × ΔE00 from base to flake: blended rims left in the base; grows with the

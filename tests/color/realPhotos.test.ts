@@ -61,7 +61,10 @@ describe('laminate line, region 0–24 px over (issue 11 table, row 3)', () => {
     }
   });
 
-  it('the ± holds the true error in ≥ 90 %', () => expect(covered(out)).toBeGreaterThanOrEqual(0.9));
+  it('the ± holds the true error in ≥ 90 % and is not blown up (median ≤ 0.8 ΔE00)', () => {
+    expect(covered(out)).toBeGreaterThanOrEqual(0.9);
+    expect(median(out.map((o) => o.out.regions[0].uncertainty))).toBeLessThanOrEqual(0.8);
+  });
 });
 
 describe('casts with the grey card, both kinds (issue 11 table, row 4)', () => {
@@ -134,5 +137,7 @@ describe('a known difference between two photos (issue 11 table, row 6)', () => 
       expect(median(set.map((r) => Math.abs(r.measured - r.truth)))).toBeLessThanOrEqual(0.3);
     }
     expect(rows.filter((r) => Math.abs(r.measured - r.truth) <= r.u).length / rows.length).toBeGreaterThanOrEqual(0.9);
+    // Not blown up: the ± of a difference stays under 1 ΔE00 (median) on these photos.
+    expect(median(rows.map((r) => r.u))).toBeLessThanOrEqual(1.0);
   });
 });
