@@ -1,12 +1,12 @@
 import { solveLinear } from './solveLinear';
 
 /** Rounds of refitting on the pixels the last fit explains. */
-const ROUNDS = 3;
+const ROUNDS = 2;
 /** Residual cut: this many robust standard deviations (1.4826 × MAD), and never under MIN_CUT L*. */
 const CUT_SIGMAS = 3;
 const MIN_CUT = 2;
 /** At most about this many pixels enter the fit (an even stride over the rest). */
-const FIT_SAMPLE = 8_000;
+const FIT_SAMPLE = 4_000;
 
 /**
  * A smooth light fall-off across a region: L* = c0 + c1·u + c2·v + c3·u² + c4·u·v + c5·v² (u, v

@@ -23,7 +23,7 @@ const CONVERGED = 0.01; // ΔE*ab: far below anything visible or reported
 /** Flake samples farther than this many keep-thresholds from the base are whole flake (core). */
 export const FLAKE_CORE = 2;
 /** Spread is exact up to this many kept pixels, else estimated from an even subset. */
-export const SPREAD_SAMPLE = 1500;
+export const SPREAD_SAMPLE = 800;
 
 const ciede2000 = differenceCiede2000(1, 1, 1);
 

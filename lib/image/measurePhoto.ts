@@ -52,16 +52,16 @@ export interface PhotoMeasure {
 export interface MeasureOptions {
   /**
    * Regions with more pixels than this are measured on a regular lattice sample (every n-th pixel
-   * of every n-th row, n = ceil(sqrt(pixels / maxSamples))). Forty thousand pixels leave the
-   * sampling error far below the figures reported (the mean of 40 000 noisy pixels moves by about
-   * 0.5 % of their scatter) (tests/color/samples.test.ts compares a
+   * of every n-th row, n = ceil(sqrt(pixels / maxSamples))). Thirty thousand pixels leave the
+   * sampling error far below the figures reported (the mean of 30 000 noisy pixels moves by about
+   * 0.6 % of their scatter) (tests/color/samples.test.ts compares a
    * lattice of ~20 000 with every pixel), and the lattice keeps specks in proportion. `pixels`
    * still counts the whole region and `kept` is scaled to it. Infinity measures every pixel.
    */
   maxSamples?: number;
 }
 
-export const DEFAULT_MAX_SAMPLES = 40_000;
+export const DEFAULT_MAX_SAMPLES = 30_000;
 /**
  * A card further than this (ΔE00) from grey means light far from daylight. One grey card cannot
  * tell a cast that scales the camera's channels from one the eye would adapt to (Bradford): both
