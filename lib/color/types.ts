@@ -75,3 +75,32 @@ export interface LabComparison {
   band: Band;
   withinTolerance: boolean;
 }
+
+/** A logged colour with the doses per cup that made it (a pour's zone, or a colorant swatch). */
+export interface DoseObservation {
+  /** Dose per cup by colorant key (colorant id and unit). */
+  doses: Record<string, number>;
+  lab: Lab;
+}
+
+/** One colorant's Kubelka–Munk coefficients per unit dose, per linear sRGB channel. */
+export interface ColorantCoefficients {
+  /** Absorption per unit dose, relative to the base plastisol's scattering. */
+  k: Vec3;
+  /** Scattering per unit dose, relative to the base plastisol's scattering. */
+  s: Vec3;
+  /** Logged colours in which this colorant was dosed. */
+  observations: number;
+  /** Median ΔE00 between the model and those logged colours. */
+  residual: number;
+}
+
+/** How the shop's colorants colour its plastisol (see fitColorantModel). */
+export interface ColorantModel {
+  /** The base plastisol's own K/S per channel (its scattering is the unit). */
+  base: Vec3;
+  colorants: Record<string, ColorantCoefficients>;
+  observations: number;
+  /** Median ΔE00 between the model and every logged colour. */
+  residual: number;
+}

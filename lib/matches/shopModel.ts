@@ -1,0 +1,55 @@
+import 'server-only';
+import { colorHistoryKeys, colorHistoryStamp, loadColorHistory } from '@/db/queries/colorHistory';
+import type { DB } from '@/db/open';
+import { fitColorantModel, type ColorantModel } from '@/lib/color';
+
+export interface ShopModel {
+  model: ColorantModel | null;
+  /** Median dose per cup of each modelled colorant key in the shop's logged colours. */
+  typical: Record<string, number>;
+  /** Logged colours the model was last fitted on. */
+  fittedOn: number;
+}
+
+interface Entry extends ShopModel {
+  stamp: string;
+  keys: string;
+}
+
+/** Refit in full once the history grew by this share since the last fit. */
+const REFIT_GROWTH = 0.02;
+const cache = new Map<string, Entry>();
+
+const median = (v: number[]) => {
+  const s = [...v].sort((a, b) => a - b);
+  return s[Math.floor(s.length / 2)] ?? 0;
+};
+
+// The team's colorant model, cached per team in this process. A new logged colour changes the
+// stamp; the cached fit is kept while the history grew by under REFIT_GROWTH and brought no new
+// colorant (the match's own pours correct it locally meanwhile), else refitted, warm-started
+// from the cached fit. The first request after a restart fits from scratch.
+export function shopModel(database: DB, teamId: string): ShopModel {
+  const stamp = colorHistoryStamp(database, teamId);
+  const hit = cache.get(teamId);
+  if (hit && hit.stamp === stamp) return hit;
+  const [count] = stamp.split(':').map(Number);
+  if (hit && hit.model && count! >= hit.fittedOn && count! < hit.fittedOn * (1 + REFIT_GROWTH)) {
+    // A colorant the fit has not seen yet needs a refit at once.
+    if (colorHistoryKeys(database, teamId).join(',') === hit.keys) {
+      hit.stamp = stamp;
+      return hit;
+    }
+  }
+  return fit(teamId, stamp, loadColorHistory(database, teamId), hit?.model ?? null);
+}
+
+function fit(teamId: string, stamp: string, observations: ReturnType<typeof loadColorHistory>, previous: ColorantModel | null): Entry {
+  const model = fitColorantModel(observations, previous);
+  const doses = new Map<string, number[]>();
+  for (const o of observations) for (const [k, d] of Object.entries(o.doses)) doses.set(k, [...(doses.get(k) ?? []), d]);
+  const typical = Object.fromEntries([...doses].map(([k, v]) => [k, median(v)]));
+  const entry: Entry = { model, typical, fittedOn: observations.length, stamp, keys: [...doses.keys()].sort().join(',') };
+  cache.set(teamId, entry);
+  return entry;
+}
