@@ -1,14 +1,14 @@
 'use client';
 
 import useSWR from 'swr';
-import type { ZoneSuggestion } from '@/lib/matches/suggestNextPour';
+import type { ZoneSuggestion } from '@/lib/matches/suggestionTypes';
 import { swrFetcher } from '@/lib/http/client';
 
 const fmt = (v: number) => String(Number(v.toFixed(3)));
 const signed = (v: number) => `${v > 0 ? '+' : '−'}${fmt(Math.abs(v))}`;
 
 // The suggested next adjustment per zone, from the shop's own history of
-// pour-to-pour changes (lib/color/estimateColorantEffects.ts).
+// pours and swatches (lib/color/fitColorantModel.ts, lib/color/adviseZone.ts).
 export function NextPourHint({ pourId }: { pourId: string }) {
   const { data, error } = useSWR<{ number: number; zones: ZoneSuggestion[] }>(`/api/pours/${pourId}/suggestion`, swrFetcher);
   if (error || !data) return null;
@@ -30,14 +30,16 @@ export function NextPourHint({ pourId }: { pourId: string }) {
                     </li>
                   ))}
                 </ul>
-                <p className="text-ink-soft">Expected about {z.predicted.dE00.toFixed(1)} ΔE00 from the target (now {z.dE00.toFixed(1)}).</p>
+                {z.predicted ? <p className="text-ink-soft">Expected about {z.predicted.dE00.toFixed(1)} ΔE00 from the target (now {z.dE00.toFixed(1)}).</p> : null}
+                {z.reason ? <p className="text-ink-soft">{z.reason}</p> : null}
+                {z.learntFrom ? <p className="text-xs text-ink-soft">{z.learntFrom}</p> : null}
               </>
             ) : null}
           </li>
         ))}
       </ul>
       <p className="mt-2 text-xs text-ink-soft">
-        Learnt from how the colour moved between earlier pours of your shop when a dose changed. Small steps behave close to linearly; treat it as a guide for the next test pour, not a promise.
+        From a Kubelka–Munk model of how your shop's colorants colour its plastisol, learnt from every pour and swatch you logged and corrected by this match's own pours. A prediction for the next test pour, not a promise.
       </p>
     </section>
   );
