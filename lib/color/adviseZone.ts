@@ -38,6 +38,8 @@ export type ZoneAdviceResult =
 
 /** A colorant needs this many logged colours before the model moves it. */
 export const MIN_OBSERVATIONS = 2;
+/** A colorant is taken out of a zone only once the model has predicted this match well (trustRatio). */
+const REMOVE_TRUST = 1.5;
 /** An added colorant must beat the best without it by this much (ΔE00). */
 const ADD_GAIN = 0.75;
 
@@ -47,7 +49,8 @@ const onGrid = (v: number, step: number, up: boolean) => (up ? Math.floor(v / st
 // doses nearest the target within the trust region (trustRatio): each dose within
 // [d·(1 − ρ), d·(1 + 2ρ) + ρ·step·4] on the bench's grid and the predicted colour move at most
 // max(3, 1.5·ρ·ΔE00 now), so one noisy pour never doubles a dose or empties a recipe. The line
-// with the most dose keeps at least one step; with ρ < 1 no line is taken out.
+// with the most dose keeps at least one step; no line is taken out before the model has
+// predicted one of this match's pours well (ρ ≥ REMOVE_TRUST).
 export function adviseZone(input: ZoneAdviceInput): ZoneAdviceResult {
   const last = input.pours[input.pours.length - 1]!;
   const dE00 = deltaE2000(input.target, last.lab);
@@ -70,10 +73,9 @@ export function adviseZone(input: ZoneAdviceInput): ZoneAdviceResult {
     key: l.key,
     amount: l.amount,
     step: l.step,
-    lower: Math.max(l === biggest ? l.step : 0, rho >= 1 ? 0 : onGrid(l.amount * (1 - rho), l.step, false), 0),
+    lower: Math.max(l === biggest || rho < REMOVE_TRUST ? l.step : 0, rho >= 1 ? 0 : onGrid(l.amount * (1 - rho), l.step, false)),
     upper: Math.max(l.amount + l.step, onGrid(l.amount * (1 + 2 * rho) + rho * l.step * 4, l.step, true)),
   }));
-  if (rho < 1) vars.forEach((v) => (v.lower = Math.max(v.lower, v.step)));
   let best = solveDoses(model, input.target, vars, fixed, correction, moveLimit);
   let used = vars;
   if (best.dE00 > input.tolerance) {

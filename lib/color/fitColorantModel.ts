@@ -1,7 +1,7 @@
 import { boundedLeastSquares, type NormalEquations } from './boundedLeastSquares';
 import { deltaE2000 } from './deltaE2000';
 import { kubelkaMunkRatio } from './kubelkaMunkRatio';
-import { labToLinearRgb } from './labToLinearRgb';
+import { labToModelChannels } from './labToModelChannels';
 import { predictMixture } from './predictMixture';
 import type { ColorantModel, DoseObservation, Vec3 } from './types';
 
@@ -16,7 +16,7 @@ import type { ColorantModel, DoseObservation, Vec3 } from './types';
 // compression (CIE 15:2004 §8.2.1) applied per channel, so dark and light colours weigh alike.
 const L_SCALE = 116;
 /** Prior on scattering: s_i = 0.1 per unit dose costs as much as a 1-unit misfit of one colour. */
-const S_PRIOR = 10;
+const S_PRIOR = 100;
 /** Weak pull of k_i toward its first estimate, so a colorant seen only in mixtures stays finite. */
 const K_PRIOR = 0.05;
 const K_MAX = 200;
@@ -30,6 +30,9 @@ interface Sparse {
 
 function fitChannel(rows: Sparse[], n: number, start: number[], kInit: number[]): number[] {
   const p = 1 + 2 * n;
+  const seen = new Array<number>(n).fill(0);
+  for (const r of rows) for (const i of r.idx) seen[i]! += 1;
+  const sPrior = seen.map((m) => S_PRIOR / Math.sqrt(Math.max(1, m)));
   const evaluate = (th: number[], withJ: boolean): NormalEquations => {
     let cost = 0;
     const jtj = withJ ? Array.from({ length: p }, () => new Array<number>(p).fill(0)) : undefined;
@@ -60,12 +63,12 @@ function fitChannel(rows: Sparse[], n: number, start: number[], kInit: number[])
       }
     }
     for (let i = 0; i < n; i++) {
-      const rs = S_PRIOR * th[1 + n + i]!;
+      const rs = sPrior[i]! * th[1 + n + i]!;
       const rk = K_PRIOR * (th[1 + i]! - kInit[i]!);
       cost += 0.5 * (rs * rs + rk * rk);
       if (withJ) {
-        jtr![1 + n + i]! += S_PRIOR * rs;
-        jtj![1 + n + i]![1 + n + i]! += S_PRIOR * S_PRIOR;
+        jtr![1 + n + i]! += sPrior[i]! * rs;
+        jtj![1 + n + i]![1 + n + i]! += sPrior[i]! * sPrior[i]!;
         jtr![1 + i]! += K_PRIOR * rk;
         jtj![1 + i]![1 + i]! += K_PRIOR * K_PRIOR;
       }
@@ -86,7 +89,7 @@ export function fitColorantModel(observations: DoseObservation[], previous?: Col
   const keys = [...new Set(observations.flatMap((o) => Object.keys(o.doses).filter((k) => o.doses[k]! > 0)))].sort();
   const at = new Map(keys.map((k, i) => [k, i]));
   const n = keys.length;
-  const rgbs = observations.map((o) => labToLinearRgb(o.lab));
+  const rgbs = observations.map((o) => labToModelChannels(o.lab));
   const base: Vec3 = [0, 0, 0];
   const colorants: ColorantModel['colorants'] = {};
   const ks: Vec3[] = keys.map(() => [0, 0, 0]);

@@ -41,5 +41,6 @@ export { linearRgbToLab } from './linearRgbToLab';
 export { localCorrection } from './localCorrection';
 export { mixtureRatio } from './mixtureRatio';
 export { predictMixture } from './predictMixture';
+export { startingRecipe, type StartingRecipe } from './startingRecipe';
 export { solveDoses, type DoseSolution, type DoseVariable } from './solveDoses';
 export { TRUST_MAX, TRUST_MIN, TRUST_START, trustRatio } from './trustRatio';

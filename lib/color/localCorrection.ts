@@ -1,5 +1,5 @@
 import { kubelkaMunkRatio } from './kubelkaMunkRatio';
-import { labToLinearRgb } from './labToLinearRgb';
+import { labToModelChannels } from './labToModelChannels';
 import { mixtureRatio } from './mixtureRatio';
 import type { ColorantModel, DoseObservation, Vec3 } from './types';
 
@@ -19,7 +19,7 @@ export function localCorrection(model: ColorantModel, pours: DoseObservation[]):
   let total = 0;
   pours.forEach((p, i) => {
     const w = Math.pow(DECAY, pours.length - 1 - i);
-    const rgb = labToLinearRgb(p.lab);
+    const rgb = labToModelChannels(p.lab);
     const ks = mixtureRatio(model, p.doses);
     for (let c = 0; c < 3; c++) out[c] += w * Math.log(kubelkaMunkRatio(rgb[c]!) / Math.max(1e-7, ks[c]!));
     total += w;

@@ -1,5 +1,5 @@
 import { kubelkaMunkReflectance } from './kubelkaMunkReflectance';
-import { linearRgbToLab } from './linearRgbToLab';
+import { modelChannelsToLab } from './modelChannelsToLab';
 import { mixtureRatio } from './mixtureRatio';
 import type { ColorantModel, Lab, Vec3 } from './types';
 
@@ -10,5 +10,5 @@ import type { ColorantModel, Lab, Vec3 } from './types';
 export function predictMixture(model: ColorantModel, doses: Record<string, number>, correction: Vec3 = [0, 0, 0]): Lab {
   const ks = mixtureRatio(model, doses);
   const rgb = ks.map((x, c) => kubelkaMunkReflectance(x * Math.exp(correction[c]!))) as Vec3;
-  return linearRgbToLab(rgb);
+  return modelChannelsToLab(rgb);
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { runPure, summarise } from './sim/runPure';
+import { runPure, startingFigures, summarise } from './sim/runPure';
 import { simHistory, simTargets, SWATCHES } from './sim/shop';
 
 // The next-pour advice on the simulated colorant system (tests/color/sim: spectral Kubelka–Munk
@@ -30,5 +30,17 @@ describe('next pour on the simulated colorant system (no server)', () => {
   it('does no worse with a longer shop history', () => {
     expect(long.median).toBeLessThanOrEqual(short.median);
     expect(long.within6).toBeGreaterThanOrEqual(short.within6 - 1);
+  });
+});
+
+describe('starting recipe on the simulated colorant system (no server)', () => {
+  it('predicts its own colour and lands near the target', () => {
+    const targets = simTargets(24, 7);
+    for (const [name, history] of [['calibration swatches only', SWATCHES], ['plus 120 earlier pours', [...SWATCHES, ...simHistory(120, 3)]]] as const) {
+      const f = startingFigures(targets, [...history], { seed: 5, noise: 0.3 });
+      console.log(`[starting recipe sim, ${name}] ${f.zones} zones: median ΔE00 predicted vs measured ${f.predVsMeasured.toFixed(2)}, median ΔE00 to target ${f.toTarget.toFixed(2)}`);
+      expect(f.toTarget).toBeLessThanOrEqual(4);
+      expect(f.predVsMeasured).toBeLessThanOrEqual(4);
+    }
   });
 });

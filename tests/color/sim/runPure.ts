@@ -1,6 +1,6 @@
 // The next-pour simulation without a server: the same lib/color functions the route uses, the
 // simulated colorant system as the bench, the maker following every suggestion exactly.
-import { adviseZone, deltaE2000, fitColorantModel, type ColorantModel, type DoseObservation, type Lab } from '@/lib/color';
+import { adviseZone, deltaE2000, fitColorantModel, startingRecipe, type ColorantModel, type DoseObservation, type Lab } from '@/lib/color';
 import { gauss, rng } from '../synth';
 import { COLORANTS, STEP, trueLab, type SimTarget } from './shop';
 
@@ -80,4 +80,29 @@ export function summarise(r: SimResult, maxPours: number) {
   const median = counts.length % 2 ? counts[(counts.length - 1) / 2]! : (counts[counts.length / 2 - 1]! + counts[counts.length / 2]!) / 2;
   const within6 = r.pours.filter((p) => p !== null && p <= 6).length;
   return { median, within6, matches: r.pours.length, worseShare: r.suggestions ? r.worse / r.suggestions : 0, ...r };
+}
+
+/** Starting recipes for every target zone from a model fitted on `history`: predicted vs measured, and measured vs target. */
+export function startingFigures(targets: SimTarget[], history: number[][], opts: { seed: number; noise: number }) {
+  const normal = gauss(rng(opts.seed));
+  const measure = (doses: number[]): Lab => {
+    const t = trueLab(doses);
+    return { l: t.l + opts.noise * normal(), a: t.a + opts.noise * normal(), b: t.b + opts.noise * normal() };
+  };
+  const model = fitColorantModel(history.map((d) => ({ doses: toDoses(d), lab: measure(d) })))!;
+  const candidates = COLORANTS.map((_, i) => ({ key: key(i), step: STEP.drops, typical: 3 }));
+  const predVsMeasured: number[] = [];
+  const toTarget: number[] = [];
+  for (const t of targets) {
+    for (const z of t.zones) {
+      const goal = trueLab(z.doses);
+      const r = startingRecipe(model, goal, candidates)!;
+      const doses = COLORANTS.map((_, i) => r.lines.find((l) => l.key === key(i))?.amount ?? 0);
+      const got = measure(doses);
+      predVsMeasured.push(deltaE2000(r.predicted, got));
+      toTarget.push(deltaE2000(goal, got));
+    }
+  }
+  const med = (v: number[]) => [...v].sort((a, b) => a - b)[Math.floor(v.length / 2)]!;
+  return { predVsMeasured: med(predVsMeasured), toTarget: med(toTarget), zones: toTarget.length };
 }
