@@ -15,3 +15,12 @@ export const swatchSchema = z.object({
 });
 
 export type SwatchInput = z.infer<typeof swatchSchema>;
+
+// POST /api/matches/:id/starting-recipe: optionally the colorants to choose from (else every
+// characterised one). An empty body is the same as {}.
+export const startingRecipeSchema = z
+  .object({
+    colorantIds: z.array(idField, { error: 'colorantIds must be a list of colorant ids' }).min(1, 'colorantIds names at least one colorant').max(12, 'at most 12 colorants').optional(),
+  })
+  .optional()
+  .transform((v) => v ?? {});
