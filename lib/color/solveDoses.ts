@@ -1,7 +1,7 @@
 import { deltaE2000 } from './deltaE2000';
 import { predictMixture } from './predictMixture';
 import { solveLinear } from './solveLinear';
-import type { ColorantModel, Lab, Vec3 } from './types';
+import type { ColorantModel, Lab, LocalCorrection, Vec3 } from './types';
 
 /** One dose the solve may move: per cup, in the line's unit, on the bench's step. */
 export interface DoseVariable {
@@ -31,7 +31,7 @@ function weights(t: Lab): Vec3 {
 // Optimization, 2nd ed., §10.3), then a coordinate search on the bench's grid scored by the true
 // ΔE00 (rounding a continuous optimum alone can lose a step's worth). `fixed` are doses the solve
 // keeps as they are; `moveLimit` caps the predicted colour move from the current recipe (ΔE00).
-export function solveDoses(model: ColorantModel, target: Lab, vars: DoseVariable[], fixed: Record<string, number>, correction: Vec3, moveLimit: number): DoseSolution {
+export function solveDoses(model: ColorantModel, target: Lab, vars: DoseVariable[], fixed: Record<string, number>, correction: LocalCorrection | undefined, moveLimit: number): DoseSolution {
   const w = weights(target);
   const dosesOf = (x: number[]) => {
     const d = { ...fixed };

@@ -29,7 +29,7 @@ export function startingRecipe(model: ColorantModel, target: Lab, candidates: Ad
   sets.sort((x, y) => x.length - y.length);
   for (const set of sets) {
     const vars = set.map((c) => ({ key: c.key, amount: Math.round(c.typical / 2 / c.step) * c.step, step: c.step, lower: 0, upper: Math.max(40 * c.step, Math.ceil((4 * c.typical) / c.step) * c.step) }));
-    const s = solveDoses(model, target, vars, {}, [0, 0, 0], Infinity);
+    const s = solveDoses(model, target, vars, {}, undefined, Infinity);
     const better = !best || (set.length > bestSize ? s.dE00 < best.dE00 - EXTRA_COLORANT_GAIN : s.dE00 < best.dE00);
     if (better) {
       best = { lines: set.map((c, i) => ({ key: c.key, amount: s.amounts[i]! })).filter((l) => l.amount > 0), predicted: s.predicted, dE00: s.dE00 };

@@ -104,3 +104,11 @@ export interface ColorantModel {
   /** Median ΔE00 between the model and every logged colour. */
   residual: number;
 }
+
+/** A match's own correction of the shop's model (see localCorrection). */
+export interface LocalCorrection {
+  /** Offset of log(K/S) per channel. */
+  offset: Vec3;
+  /** Factor on every dose: this match's colorants act this much stronger than the shop's. */
+  scale: number;
+}

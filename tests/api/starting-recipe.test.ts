@@ -25,7 +25,7 @@ describe('calibration swatches and the starting recipe', () => {
     const match = (await api('/api/matches', { cookie, body: { name: 'Orange-ish', zones: ['back', 'belly'] } })).body;
 
     expect((await api(`/api/matches/${match.id}/starting-recipe`, { cookie, body: {} })).status).toBe(409);
-    const truth = [[0, 2, 0.5, 0, 0, 0], [1, 3, 0, 0, 0, 0]];
+    const truth = [[0.5, 2.5, 0, 0, 0, 0], [1, 3, 0, 0, 0, 0]];
     const ref = await renderPour(trueLab(truth[0]!), trueLab(truth[1]!), 77).then((b) => upload(cookie, b, 'reference'));
     const zones = [{ name: 'back', shape: BACK_SHAPE }, { name: 'belly', shape: BELLY_SHAPE }];
     expect((await api(`/api/matches/${match.id}/target`, { cookie, body: { photoId: ref, zones } })).status).toBe(200);
@@ -72,8 +72,7 @@ describe('calibration swatches and the starting recipe', () => {
         expect(l.unit).toBe('drops');
         expect((l.amount * 2) % 1).toBeCloseTo(0, 9); // half-drop steps
       }
-      // Only red and yellow are calibrated; the belly is a mix of those two, the back yellow with
-      // a little of the uncalibrated blue: the predictions stay near the targets.
+      // Only red and yellow are calibrated, and both targets are mixes of those two.
       expect(z.predicted.dE00).toBeLessThan(4);
     }
     // The recipe is one the pour route takes.
