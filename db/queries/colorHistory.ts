@@ -96,3 +96,45 @@ export function colorHistoryKeys(database: DB, teamId: string): string[] {
     .all();
   return [...new Set([...lines, ...sw].map((r) => doseKey(r.colorantId, r.unit)))].sort();
 }
+
+// Flake observations per flake colorant key: every pour zone dosed with exactly one flake
+// colorant, its dose per cup and the measured flake coverage of the zone.
+export function loadFlakeHistory(database: DB, teamId: string): Record<string, { dose: number; coverage: number }[]> {
+  const lines = database
+    .select({ pourId: recipeLines.pourId, zone: recipeLines.zone, colorantId: recipeLines.colorantId, amount: recipeLines.amount, unit: recipeLines.unit })
+    .from(recipeLines)
+    .innerJoin(pours, eq(pours.id, recipeLines.pourId))
+    .innerJoin(colorants, eq(colorants.id, recipeLines.colorantId))
+    .where(and(eq(pours.teamId, teamId), eq(colorants.kind, 'flake')))
+    .all();
+  const byZone = new Map<string, { key: string; dose: number }[]>();
+  for (const l of lines) byZone.set(`${l.pourId}|${l.zone}`, [...(byZone.get(`${l.pourId}|${l.zone}`) ?? []), { key: doseKey(l.colorantId, l.unit), dose: l.amount }]);
+  const out: Record<string, { dose: number; coverage: number }[]> = {};
+  if (byZone.size === 0) return out;
+  for (const s of database
+    .select({ pourId: samples.pourId, zone: samples.zone, flake: samples.flake })
+    .from(samples)
+    .where(and(eq(samples.teamId, teamId), eq(samples.purpose, 'pour')))
+    .all()) {
+    const f = byZone.get(`${s.pourId}|${s.zone}`);
+    if (!f || new Set(f.map((x) => x.key)).size !== 1) continue;
+    const coverage = (s.flake as { coverage?: number } | null)?.coverage;
+    if (typeof coverage !== 'number') continue;
+    (out[f[0]!.key] ??= []).push({ dose: f.reduce((t, x) => t + x.dose, 0), coverage });
+  }
+  return out;
+}
+
+// The mean measured flake coverage of each zone of a match's target.
+export function targetFlakeCoverage(database: DB, teamId: string, matchId: string): Map<string, number> {
+  const acc = new Map<string, number[]>();
+  for (const s of database
+    .select({ zone: samples.zone, flake: samples.flake })
+    .from(samples)
+    .where(and(eq(samples.teamId, teamId), eq(samples.matchId, matchId), eq(samples.purpose, 'target')))
+    .all()) {
+    const c = (s.flake as { coverage?: number } | null)?.coverage;
+    if (typeof c === 'number') acc.set(s.zone, [...(acc.get(s.zone) ?? []), c]);
+  }
+  return new Map([...acc].map(([z, v]) => [z, v.reduce((a, b) => a + b, 0) / v.length]));
+}

@@ -12,6 +12,7 @@ export { DEAD_BAND, describeDifference, type DifferenceWords, type HueDirection 
 export { flakeCoverage, type FlakeCoverage } from './flakeCoverage';
 export { fitFlakeRate, type FlakeObservation, type FlakeRate } from './fitFlakeRate';
 export { flakeDoseForCoverage } from './flakeDoseForCoverage';
+export { adviseFlake, FLAKE_TOLERANCE, type FlakeAdvice } from './adviseFlake';
 export { findGlare, GLARE_CLIP, GLARE_C_OFFSET, GLARE_C_RATIO, GLARE_DL, GLARE_MAX_SHARE } from './findGlare';
 export { invertMat3 } from './invertMat3';
 export { labDifference, type LabDifference } from './labDifference';

@@ -1,12 +1,14 @@
 import 'server-only';
-import { colorHistoryKeys, colorHistoryStamp, loadColorHistory } from '@/db/queries/colorHistory';
+import { colorHistoryKeys, colorHistoryStamp, loadColorHistory, loadFlakeHistory } from '@/db/queries/colorHistory';
 import type { DB } from '@/db/open';
-import { fitColorantModel, type ColorantModel } from '@/lib/color';
+import { fitColorantModel, fitFlakeRate, type ColorantModel, type FlakeRate } from '@/lib/color';
 
 export interface ShopModel {
   model: ColorantModel | null;
   /** Median dose per cup of each modelled colorant key in the shop's logged colours. */
   typical: Record<string, number>;
+  /** Poisson coverage rate per flake colorant key (fitFlakeRate). */
+  flake: Record<string, FlakeRate>;
   /** Logged colours the model was last fitted on. */
   fittedOn: number;
 }
@@ -41,15 +43,21 @@ export function shopModel(database: DB, teamId: string): ShopModel {
       return hit;
     }
   }
-  return fit(teamId, stamp, loadColorHistory(database, teamId), hit?.model ?? null);
+  return fit(teamId, stamp, loadColorHistory(database, teamId), hit?.model ?? null, database);
 }
 
-function fit(teamId: string, stamp: string, observations: ReturnType<typeof loadColorHistory>, previous: ColorantModel | null): Entry {
+function fit(teamId: string, stamp: string, observations: ReturnType<typeof loadColorHistory>, previous: ColorantModel | null, database: DB): Entry {
   const model = fitColorantModel(observations, previous);
   const doses = new Map<string, number[]>();
   for (const o of observations) for (const [k, d] of Object.entries(o.doses)) doses.set(k, [...(doses.get(k) ?? []), d]);
   const typical = Object.fromEntries([...doses].map(([k, v]) => [k, median(v)]));
-  const entry: Entry = { model, typical, fittedOn: observations.length, stamp, keys: [...doses.keys()].sort().join(',') };
+  const flake = Object.fromEntries(
+    Object.entries(loadFlakeHistory(database, teamId)).flatMap(([k, obs]) => {
+      const r = fitFlakeRate(obs);
+      return r ? [[k, r]] : [];
+    }),
+  );
+  const entry: Entry = { model, typical, flake, fittedOn: observations.length, stamp, keys: [...doses.keys()].sort().join(',') };
   cache.set(teamId, entry);
   return entry;
 }

@@ -1,16 +1,18 @@
 import 'server-only';
-import { loadMatchHistory } from '@/db/queries/colorHistory';
+import { loadMatchHistory, targetFlakeCoverage } from '@/db/queries/colorHistory';
 import { listColorants } from '@/db/queries/libraries';
 import type { DB } from '@/db/open';
-import { getPour } from '@/db/queries/pours';
+import { getPour, type PourView } from '@/db/queries/pours';
 import type { DoseUnit } from '@/db/schema';
-import { adviseZone, MIN_OBSERVATIONS, type ColorantModel } from '@/lib/color';
+import { adviseFlake, adviseZone, MIN_OBSERVATIONS, type ColorantModel } from '@/lib/color';
 import { ApiError } from '@/lib/http/api';
 import { DOSE_STEP, doseKey, MODELLED_KINDS } from './doseModel';
 import { shopModel } from './shopModel';
 import type { PourSuggestion, ZoneSuggestion } from './suggestionTypes';
 
 export type { PourSuggestion, ZoneSuggestion } from './suggestionTypes';
+
+type PourZone = PourView['zones'][number];
 
 const shortName = (name: string) => name.replace(/^[^,]*,\s*/, '');
 
@@ -29,14 +31,17 @@ function learntFrom(model: ColorantModel, keys: string[], names: Map<string, str
 export function suggestNextPour(database: DB, teamId: string, pourId: string, tolerance: number): PourSuggestion {
   const pour = getPour(database, teamId, pourId);
   if (!pour) throw new ApiError(404, 'not_found', 'No such pour in your team');
-  const { model, typical } = shopModel(database, teamId);
+  const view: PourView = pour;
+  const { model, typical, flake } = shopModel(database, teamId);
+  const targetFlake = targetFlakeCoverage(database, teamId, pour.matchId);
   const history = loadMatchHistory(database, teamId, pour.matchId, pour.number);
   const library = listColorants(database, teamId);
   const names = new Map(library.map((c) => [c.id, c.name]));
   const modelled = (kind: string) => (MODELLED_KINDS as readonly string[]).includes(kind);
-  const zones: ZoneSuggestion[] = pour.zones.map((z) => {
+  const zones: ZoneSuggestion[] = pour.zones.map((z) => withFlake(colourAdvice(z), z));
+  function colourAdvice(z: PourZone): ZoneSuggestion {
     const lines = new Map<string, { colorantId: string; colorant: string; unit: DoseUnit; amount: number }>();
-    for (const l of pour.recipe.filter((r) => r.zone === z.name && modelled(r.kind))) {
+    for (const l of view.recipe.filter((r) => r.zone === z.name && modelled(r.kind))) {
       const k = doseKey(l.colorantId, l.unit);
       const had = lines.get(k);
       lines.set(k, { colorantId: l.colorantId, colorant: l.colorant, unit: l.unit, amount: (had?.amount ?? 0) + l.amount });
@@ -73,6 +78,25 @@ export function suggestNextPour(database: DB, teamId: string, pourId: string, to
       reason: advice.note,
       learntFrom: learntFrom(model!, keys, names, pours.length),
     };
-  });
+  }
+  // Flake is dosed by coverage, apart from the colour (lib/color/adviseFlake.ts).
+  function withFlake(advice: ZoneSuggestion, z: PourZone): ZoneSuggestion {
+    const lines = view.recipe.filter((r) => r.zone === z.name && r.kind === 'flake');
+    const target = targetFlake.get(z.name);
+    const now = (z.flake as { coverage?: number } | null)?.coverage;
+    if (lines.length !== 1 || target === undefined || typeof now !== 'number') return advice;
+    const l = lines[0]!;
+    const key = doseKey(l.colorantId, l.unit);
+    const f = adviseFlake({ key, amount: l.amount, step: DOSE_STEP[l.unit] }, now, target, flake[key]?.k ?? null);
+    if (!f) return advice;
+    const change = { colorantId: l.colorantId, colorant: l.colorant, unit: l.unit, from: f.from, to: f.to };
+    return {
+      ...advice,
+      status: 'suggested',
+      changes: advice.status === 'suggested' ? [...advice.changes, change] : [change],
+      predicted: advice.predicted ?? { lab: z.lab, dE00: z.dE00 },
+      reason: [advice.reason, f.note].filter(Boolean).join(' '),
+    };
+  }
   return { pourId, number: pour.number, zones };
 }

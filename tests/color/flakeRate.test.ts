@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { fitFlakeRate, flakeDoseForCoverage } from '@/lib/color';
+import { adviseFlake, fitFlakeRate, flakeDoseForCoverage } from '@/lib/color';
 import { rng } from './synth';
 
 // A Monte-Carlo of random specks: discs of one radius dropped uniformly on a unit square with
@@ -46,5 +46,19 @@ describe('flake by coverage (Poisson model)', () => {
     expect(flakeDoseForCoverage(k, 0)).toBe(0);
     expect(fitFlakeRate([])).toBeNull();
     expect(fitFlakeRate([{ dose: 0, coverage: 0.2 }])).toBeNull();
+  });
+});
+
+describe('adviseFlake', () => {
+  it('re-doses a zone\'s flake from its own coverage, on 1/32 tsp steps and bounded', () => {
+    // 1/8 tsp covered 10 %: k = −ln 0.9 / 0.125 ≈ 0.843; 20 % needs −ln 0.8 / k ≈ 0.265 tsp → 8/32.
+    const a = adviseFlake({ key: 'f:tsp', amount: 0.125, step: 1 / 32 }, 0.1, 0.2, null)!;
+    expect(a.to).toBeCloseTo(0.25, 9);
+    expect(a.note).toMatch(/Poisson/);
+    // Far more wanted than one pour may take: at most double.
+    expect(adviseFlake({ key: 'f:tsp', amount: 0.125, step: 1 / 32 }, 0.05, 0.6, null)!.to).toBeCloseTo(0.25, 9);
+    expect(adviseFlake({ key: 'f:tsp', amount: 0.125, step: 1 / 32 }, 0.19, 0.2, null)).toBeNull();
+    // No flake seen on the pour: the shop's rate decides.
+    expect(adviseFlake({ key: 'f:tsp', amount: 0.125, step: 1 / 32 }, 0, 0.1, 0.5)!.to).toBeCloseTo(0.21875, 9);
   });
 });
