@@ -2,7 +2,7 @@ import { and, asc, eq, inArray, lte, sql } from 'drizzle-orm';
 import type { DoseObservation } from '../../lib/color/types';
 import { doseKey, MODELLED_KINDS } from '../../lib/matches/doseModel';
 import type { DB } from '../open';
-import { colorants, pours, recipeLines, samples, swatches } from '../schema';
+import { colorants, molds, pours, recipeLines, samples, swatches } from '../schema';
 
 type Doses = Record<string, number>;
 
@@ -42,11 +42,13 @@ export function colorHistoryStamp(database: DB, teamId: string): string {
 export function loadColorHistory(database: DB, teamId: string): DoseObservation[] {
   const doses = poursDoses(database, teamId);
   const out: DoseObservation[] = database
-    .select({ pourId: samples.pourId, zone: samples.zone, l: samples.l, a: samples.a, b: samples.b })
+    .select({ pourId: samples.pourId, zone: samples.zone, l: samples.l, a: samples.a, b: samples.b, thickness: molds.thickness })
     .from(samples)
+    .innerJoin(pours, eq(pours.id, samples.pourId))
+    .leftJoin(molds, eq(molds.id, pours.moldId))
     .where(and(eq(samples.teamId, teamId), eq(samples.purpose, 'pour')))
     .all()
-    .map((s) => ({ doses: doses.get(`${s.pourId}|${s.zone}`) ?? {}, lab: { l: s.l, a: s.a, b: s.b } }));
+    .map((s) => ({ doses: doses.get(`${s.pourId}|${s.zone}`) ?? {}, lab: { l: s.l, a: s.a, b: s.b }, thickness: s.thickness ?? 'standard' }));
   for (const s of database
     .select({ colorantId: swatches.colorantId, kind: colorants.kind, amount: swatches.amount, unit: swatches.unit, l: samples.l, a: samples.a, b: samples.b })
     .from(swatches)

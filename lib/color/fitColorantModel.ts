@@ -1,4 +1,5 @@
 import { boundedLeastSquares, type NormalEquations } from './boundedLeastSquares';
+import { fitThicknessFactor } from './fitThicknessFactor';
 import { deltaE2000 } from './deltaE2000';
 import { kubelkaMunkRatio } from './kubelkaMunkRatio';
 import { labToModelChannels } from './labToModelChannels';
@@ -83,8 +84,32 @@ function fitChannel(rows: Sparse[], n: number, start: number[], kInit: number[])
 // Fits the shop's colorant model to every logged colour with its doses per cup, by bounded,
 // regularised nonlinear least squares (boundedLeastSquares). `previous` warm-starts the fit.
 // A colorant appears in the model only once it was dosed in at least one logged colour; with no
-// observation at all there is no model (null).
+// observation at all there is no model (null). Colours poured in thin or thick molds enter with
+// their doses scaled by their class's factor (fitThicknessFactor), found by alternating: fit on
+// all colours as they are, fit each class's factor against that, refit with the factors.
 export function fitColorantModel(observations: DoseObservation[], previous?: ColorantModel | null): ColorantModel | null {
+  const first = fitScaled(observations, previous);
+  if (!first) return null;
+  const classes = (['thin', 'thick'] as const).map((t) => ({ t, obs: observations.filter((o) => o.thickness === t) }));
+  if (classes.every((c) => c.obs.length < 2)) return { ...first, thickness: thicknessOf(observations, { thin: 1, thick: 1 }) };
+  const standard = observations.filter((o) => o.thickness !== 'thin' && o.thickness !== 'thick');
+  const base = standard.length >= 2 ? fitScaled(standard, first) ?? first : first;
+  const factors = { thin: 1, thick: 1 };
+  for (const c of classes) if (c.obs.length >= 2) factors[c.t] = fitThicknessFactor(base, c.obs);
+  const scaled = observations.map((o) => {
+    const f = o.thickness === 'thin' ? factors.thin : o.thickness === 'thick' ? factors.thick : 1;
+    return f === 1 ? o : { ...o, doses: Object.fromEntries(Object.entries(o.doses).map(([k, v]) => [k, v * f])) };
+  });
+  const model = fitScaled(scaled, base)!;
+  return { ...model, thickness: thicknessOf(observations, factors) };
+}
+
+function thicknessOf(observations: DoseObservation[], f: { thin: number; thick: number }): NonNullable<ColorantModel['thickness']> {
+  const n = (t: string) => observations.filter((o) => (o.thickness ?? 'standard') === t).length;
+  return { thin: { factor: f.thin, observations: n('thin') }, standard: { factor: 1, observations: n('standard') }, thick: { factor: f.thick, observations: n('thick') } };
+}
+
+function fitScaled(observations: DoseObservation[], previous?: ColorantModel | null): ColorantModel | null {
   if (observations.length === 0) return null;
   const keys = [...new Set(observations.flatMap((o) => Object.keys(o.doses).filter((k) => o.doses[k]! > 0)))].sort();
   const at = new Map(keys.map((k, i) => [k, i]));

@@ -37,6 +37,7 @@ export { solveLinear } from './solveLinear';
 export { adviseZone, MIN_OBSERVATIONS, type AdviceCandidate, type AdviceLine, type ZoneAdviceInput, type ZoneAdviceResult } from './adviseZone';
 export { boundedLeastSquares, type BoundedLeastSquaresResult, type NormalEquations } from './boundedLeastSquares';
 export { fitColorantModel } from './fitColorantModel';
+export { fitThicknessFactor } from './fitThicknessFactor';
 export { kubelkaMunkRatio, R_MAX, R_MIN } from './kubelkaMunkRatio';
 export { kubelkaMunkReflectance } from './kubelkaMunkReflectance';
 export { labToLinearRgb } from './labToLinearRgb';

@@ -81,6 +81,8 @@ export interface DoseObservation {
   /** Dose per cup by colorant key (colorant id and unit). */
   doses: Record<string, number>;
   lab: Lab;
+  /** The mold's thickness class, when known (a thin body reads lighter for the same recipe). */
+  thickness?: 'thin' | 'standard' | 'thick';
 }
 
 /** One colorant's Kubelka–Munk coefficients per unit dose, per linear sRGB channel. */
@@ -103,6 +105,8 @@ export interface ColorantModel {
   observations: number;
   /** Median ΔE00 between the model and every logged colour. */
   residual: number;
+  /** Dose factor per mold thickness class (standard = 1), with the logged colours behind it. */
+  thickness?: Record<'thin' | 'standard' | 'thick', { factor: number; observations: number }>;
 }
 
 /** A match's own correction of the shop's model (see localCorrection). */

@@ -190,3 +190,18 @@ describe('startingRecipe', () => {
     for (const l of r.lines) expect((l.amount * 2) % 1).toBeCloseTo(0, 9);
   });
 });
+
+describe('mold thickness class', () => {
+  it('learns how much of its dose a thin mold shows, and the standard colours stay as they were', () => {
+    // Thin pours made with the truth at 0.6 of their dose (the model's own first-order form of a
+    // thinner layer; an invented factor, the truth of this test).
+    const standard = [observe({}), ...randomRecipes(30, 6).map(observe)];
+    const thin = randomRecipes(12, 7).map((d) => ({ doses: d, lab: predictMixture(TRUTH, Object.fromEntries(Object.entries(d).map(([k, v]) => [k, v * 0.6]))), thickness: 'thin' as const }));
+    const model = fitColorantModel([...standard, ...thin])!;
+    expect(model.thickness!.thin.factor).toBeGreaterThan(0.5);
+    expect(model.thickness!.thin.factor).toBeLessThan(0.7);
+    expect(model.thickness!.thin.observations).toBe(12);
+    expect(model.thickness!.thick.factor).toBe(1);
+    for (const d of randomRecipes(5, 8)) expect(deltaE2000(predictMixture(TRUTH, d), predictMixture(model, d))).toBeLessThan(1);
+  });
+});
