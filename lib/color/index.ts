@@ -38,6 +38,7 @@ export { adviseZone, MIN_OBSERVATIONS, type AdviceCandidate, type AdviceLine, ty
 export { boundedLeastSquares, type BoundedLeastSquaresResult, type NormalEquations } from './boundedLeastSquares';
 export { fitColorantModel } from './fitColorantModel';
 export { fitThicknessFactor } from './fitThicknessFactor';
+export { redoseForThickness } from './redoseForThickness';
 export { kubelkaMunkRatio, R_MAX, R_MIN } from './kubelkaMunkRatio';
 export { kubelkaMunkReflectance } from './kubelkaMunkReflectance';
 export { labToLinearRgb } from './labToLinearRgb';

@@ -7,6 +7,7 @@ import {
   kubelkaMunkRatio,
   kubelkaMunkReflectance,
   predictMixture,
+  redoseForThickness,
   startingRecipe,
   trustRatio,
   TRUST_START,
@@ -203,5 +204,14 @@ describe('mold thickness class', () => {
     expect(model.thickness!.thin.observations).toBe(12);
     expect(model.thickness!.thick.factor).toBe(1);
     for (const d of randomRecipes(5, 8)) expect(deltaE2000(predictMixture(TRUTH, d), predictMixture(model, d))).toBeLessThan(1);
+  });
+});
+
+describe('redoseForThickness', () => {
+  it('keeps the effective dose, on the bench step, never below one step', () => {
+    // 4 drops in a standard mold (factor 1) for a thin one showing 0.6 of its dose: 4/0.6 ≈ 6.67 → 6.5.
+    expect(redoseForThickness(4, 0.5, 1, 0.6)).toBeCloseTo(6.5, 9);
+    expect(redoseForThickness(6.5, 0.5, 0.6, 1)).toBeCloseTo(4, 9);
+    expect(redoseForThickness(0.5, 0.5, 0.2, 1)).toBeCloseTo(0.5, 9);
   });
 });
