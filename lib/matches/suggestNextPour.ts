@@ -88,7 +88,8 @@ export function suggestNextPour(database: DB, teamId: string, pourId: string, to
     const l = lines[0]!;
     const key = doseKey(l.colorantId, l.unit);
     const f = adviseFlake({ key, amount: l.amount, step: DOSE_STEP[l.unit] }, now, target, flake[key]?.k ?? null);
-    if (!f) return advice;
+    // Never empty a zone: flake alone in a zone is not taken out.
+    if (!f || (f.to === 0 && view.recipe.filter((r) => r.zone === z.name).length === 1)) return advice;
     const change = { colorantId: l.colorantId, colorant: l.colorant, unit: l.unit, from: f.from, to: f.to };
     return {
       ...advice,
