@@ -7,6 +7,9 @@ export interface NormalEquations {
   jtr?: number[];
 }
 
+/** Stop once a step lowers the cost by less than this share of it. */
+const RELATIVE_GAIN = 1e-6;
+
 export interface BoundedLeastSquaresResult {
   params: number[];
   cost: number;
@@ -54,7 +57,7 @@ export function boundedLeastSquares(
         here = evaluate(params, true);
         mu = Math.max(mu / 3, 1e-9);
         improved = true;
-        if (gain <= 1e-10 * Math.max(1, here.cost)) return { params, cost: here.cost, iterations: iterations + 1 };
+        if (gain <= RELATIVE_GAIN * Math.max(1e-9, here.cost)) return { params, cost: here.cost, iterations: iterations + 1 };
         break;
       }
       mu *= 4;
