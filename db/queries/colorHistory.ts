@@ -1,4 +1,4 @@
-import { and, asc, eq, inArray, lte, sql } from 'drizzle-orm';
+import { and, asc, eq, gte, inArray, lte, sql } from 'drizzle-orm';
 import type { DoseObservation } from '../../lib/color/types';
 import { doseKey, MODELLED_KINDS } from '../../lib/matches/doseModel';
 import type { DB } from '../open';
@@ -81,20 +81,21 @@ export function loadMatchHistory(database: DB, teamId: string, matchId: string, 
   return out;
 }
 
-// The modelled colorant keys (colorant and unit) the team has ever dosed, in pours or swatches.
-export function colorHistoryKeys(database: DB, teamId: string): string[] {
+// The modelled colorant keys (colorant and unit) dosed in the team's pours and swatches logged
+// at or after `since` (unix ms): what a cached fit has to check for a colorant it has not seen.
+export function colorHistoryKeysSince(database: DB, teamId: string, since: number): string[] {
   const lines = database
     .selectDistinct({ colorantId: recipeLines.colorantId, unit: recipeLines.unit })
-    .from(recipeLines)
-    .innerJoin(pours, eq(pours.id, recipeLines.pourId))
+    .from(pours)
+    .innerJoin(recipeLines, eq(recipeLines.pourId, pours.id))
     .innerJoin(colorants, eq(colorants.id, recipeLines.colorantId))
-    .where(and(eq(pours.teamId, teamId), inArray(colorants.kind, [...MODELLED_KINDS])))
+    .where(and(eq(pours.teamId, teamId), gte(pours.createdAt, since), inArray(colorants.kind, [...MODELLED_KINDS])))
     .all();
   const sw = database
     .selectDistinct({ colorantId: swatches.colorantId, unit: swatches.unit })
     .from(swatches)
     .innerJoin(colorants, eq(colorants.id, swatches.colorantId))
-    .where(and(eq(swatches.teamId, teamId), inArray(colorants.kind, [...MODELLED_KINDS]), sql`${swatches.amount} > 0`))
+    .where(and(eq(swatches.teamId, teamId), gte(swatches.createdAt, since), inArray(colorants.kind, [...MODELLED_KINDS]), sql`${swatches.amount} > 0`))
     .all();
   return [...new Set([...lines, ...sw].map((r) => doseKey(r.colorantId, r.unit)))].sort();
 }

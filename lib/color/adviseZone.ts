@@ -40,6 +40,8 @@ export type ZoneAdviceResult =
 export const MIN_OBSERVATIONS = 2;
 /** A colorant is taken out of a zone only once the model has predicted this match well (trustRatio). */
 const REMOVE_TRUST = 1.5;
+/** Colorants the zone lacks that are tried in full, after screening. */
+const ADD_TRIES = 3;
 /** An added colorant must beat the best without it by this much (ΔE00). */
 const ADD_GAIN = 0.75;
 
@@ -79,8 +81,16 @@ export function adviseZone(input: ZoneAdviceInput): ZoneAdviceResult {
   let best = solveDoses(model, input.target, vars, fixed, correction, moveLimit);
   let used = vars;
   if (best.dE00 > input.tolerance) {
-    for (const c of input.candidates) {
-      if (modelled.has(c.key) || (model.colorants[c.key]?.observations ?? 0) < MIN_OBSERVATIONS) continue;
+    // Screen the candidates by one prediction each (a small dose added to the best recipe so
+    // far), and solve only for the most promising few.
+    const bestDoses = { ...fixed, ...Object.fromEntries(vars.map((v, i) => [v.key, best.amounts[i]!])) };
+    const screened = input.candidates
+      .filter((c) => !modelled.has(c.key) && (model.colorants[c.key]?.observations ?? 0) >= MIN_OBSERVATIONS)
+      .map((c) => ({ c, score: deltaE2000(input.target, predictMixture(model, { ...bestDoses, [c.key]: Math.max(c.step, c.typical / 2) }, correction)) }))
+      .sort((a, b) => a.score - b.score)
+      .slice(0, ADD_TRIES)
+      .map((x) => x.c);
+    for (const c of screened) {
       const more = [...vars, { key: c.key, amount: 0, step: c.step, lower: 0, upper: Math.max(c.step, onGrid(c.typical * Math.min(1.5, rho), c.step, true)) }];
       const s = solveDoses(model, input.target, more, fixed, correction, moveLimit);
       if (s.dE00 < best.dE00 - ADD_GAIN) {

@@ -1,5 +1,5 @@
 import 'server-only';
-import { colorHistoryKeys, colorHistoryStamp, loadColorHistory, loadFlakeHistory } from '@/db/queries/colorHistory';
+import { colorHistoryKeysSince, colorHistoryStamp, loadColorHistory, loadFlakeHistory } from '@/db/queries/colorHistory';
 import type { DB } from '@/db/open';
 import { fitColorantModel, fitFlakeRate, type ColorantModel, type FlakeRate } from '@/lib/color';
 
@@ -15,7 +15,7 @@ export interface ShopModel {
 
 interface Entry extends ShopModel {
   stamp: string;
-  keys: string;
+  keySet: Set<string>;
 }
 
 /** Refit in full once the history grew by this share since the last fit. */
@@ -38,7 +38,9 @@ export function shopModel(database: DB, teamId: string): ShopModel {
   const [count] = stamp.split(':').map(Number);
   if (hit && hit.model && count! >= hit.fittedOn && count! < hit.fittedOn * (1 + REFIT_GROWTH)) {
     // A colorant the fit has not seen yet needs a refit at once.
-    if (colorHistoryKeys(database, teamId).join(',') === hit.keys) {
+    // One second of margin: a pour's row and its samples are stamped a moment apart.
+    const since = Number(hit.stamp.split(':')[1]) - 1000;
+    if (colorHistoryKeysSince(database, teamId, since).every((k) => hit.keySet.has(k))) {
       hit.stamp = stamp;
       return hit;
     }
@@ -57,7 +59,7 @@ function fit(teamId: string, stamp: string, observations: ReturnType<typeof load
       return r ? [[k, r]] : [];
     }),
   );
-  const entry: Entry = { model, typical, flake, fittedOn: observations.length, stamp, keys: [...doses.keys()].sort().join(',') };
+  const entry: Entry = { model, typical, flake, fittedOn: observations.length, stamp, keySet: new Set(doses.keys()) };
   cache.set(teamId, entry);
   return entry;
 }
