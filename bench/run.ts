@@ -1,6 +1,7 @@
 import path from 'node:path';
 import { buildApp } from '../scripts/build-app';
 import { buildIsStale } from '../scripts/build-stale';
+import { run } from '../scripts/run';
 import { runDeltaELoad } from './delta-e-load';
 import { runMeasureBench } from './measure';
 import { printNextPourSim } from './next-pour-sim';
