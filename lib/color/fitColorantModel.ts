@@ -123,7 +123,11 @@ function fitScaled(observations: DoseObservation[], previous?: ColorantModel | n
     const rows: Sparse[] = observations.map((o, j) => {
       const idx: number[] = [];
       const dose: number[] = [];
-      for (const [k, d] of Object.entries(o.doses)) if (d > 0) (idx.push(at.get(k)!), dose.push(d));
+      for (const [k, d] of Object.entries(o.doses)) {
+        if (!(d > 0)) continue;
+        idx.push(at.get(k)!);
+        dose.push(d);
+      }
       return { idx, dose, target: Math.cbrt(Math.min(0.9999, Math.max(1e-4, rgbs[j]![c]!))) };
     });
     const ratio = rows.map((_, j) => kubelkaMunkRatio(rgbs[j]![c]!));

@@ -61,7 +61,7 @@ async function runMatch(s: Awaited<ReturnType<typeof shop>>, t: SimTarget, n: nu
   const m = (await api('/api/matches', { cookie, body: { name: `Sim target ${n}`, zones: ['back', 'belly'] } })).body;
   const ref = await photoOf(cookie, t.zones[0]!.doses, t.zones[1]!.doses, 'reference');
   expect((await api(`/api/matches/${m.id}/target`, { cookie, body: { photoId: ref, zones: ZONES } })).status).toBe(200);
-  let doses = t.firstGuess.map((g) => [...g]);
+  const doses = t.firstGuess.map((g) => [...g]);
   let lines: Line[] = [...s.recipe('back', doses[0]!), ...s.recipe('belly', doses[1]!)];
   let before: number[] | null = null;
   let suggested: boolean[] = [];
