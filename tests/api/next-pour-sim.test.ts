@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { renderPour } from '../color/sim/render';
 import { COLORANTS, simHistory, simTargets, SWATCHES, trueLab, type SimTarget } from '../color/sim/shop';
+import { deltaE2000 } from '@/lib/color';
 import { api, baseUrl, signUpShop } from '../support/http';
 import { BACK_SHAPE, BELLY_SHAPE } from '../support/photos';
 
@@ -122,6 +123,7 @@ describe('next-pour hint on the simulated shop, through the API', () => {
   it('brings the median match within ΔE00 2.0 by the third pour, and a longer history does not hurt', async () => {
     const targets = simTargets(TARGETS, 7);
     const results = [];
+    let last: Awaited<ReturnType<typeof shop>> | null = null;
     for (const [name, history] of [['swatches only', []], ['plus 60 earlier pours', simHistory(120, 3)]] as const) {
       const s = await shop(`Sim shop ${name}`, [...history]);
       const tally: Tally = { pours: [], suggestions: 0, worse: 0, emptied: 0, refused: 0, predErr: [] };
@@ -133,8 +135,34 @@ describe('next-pour hint on the simulated shop, through the API', () => {
       expect(tally.refused).toBe(0);
       expect(tally.worse / Math.max(1, tally.suggestions)).toBeLessThan(0.1);
       results.push(r);
+      last = s;
     }
     expect(results[1]!.median).toBeLessThanOrEqual(results[0]!.median);
     expect(results[1]!.within6).toBeGreaterThanOrEqual(results[0]!.within6 - 1);
-  }, 600_000);
+
+    // The starting recipe from the same shop's model, poured as the first pour of a fresh match.
+    const predVsMeasured: number[] = [];
+    const toTarget: number[] = [];
+    const { cookie, ids } = last!;
+    for (const [n, t] of targets.entries()) {
+      const m = (await api('/api/matches', { cookie, body: { name: `Sim start ${n}`, zones: ['back', 'belly'] } })).body;
+      const ref = await photoOf(cookie, t.zones[0]!.doses, t.zones[1]!.doses, 'reference');
+      expect((await api(`/api/matches/${m.id}/target`, { cookie, body: { photoId: ref, zones: ZONES } })).status).toBe(200);
+      const start = await api(`/api/matches/${m.id}/starting-recipe`, { cookie, body: {} });
+      expect(start.status).toBe(200);
+      const zones = start.body.zones as { zone: string; recipe: { colorantId: string; amount: number; unit: string }[]; predicted: { lab: { l: number; a: number; b: number } } }[];
+      const doses = zones.map((z) => ids.map((id) => z.recipe.find((l) => l.colorantId === id)?.amount ?? 0));
+      const recipe = zones.flatMap((z) => z.recipe.map((l) => ({ zone: z.zone, colorantId: l.colorantId, amount: l.amount, unit: l.unit })));
+      const photoId = await photoOf(cookie, doses[0]!, doses[1]!, 'pour');
+      const pour = await api(`/api/matches/${m.id}/pours`, { cookie, body: { photoId, zones: ZONES, recipe } });
+      expect(pour.status).toBe(201);
+      for (const [z, zone] of zones.entries()) {
+        const measured = pour.body.zones[z];
+        predVsMeasured.push(deltaE2000(zone.predicted.lab, measured.lab));
+        toTarget.push(measured.dE00);
+      }
+    }
+    console.log(`[starting recipe, API sim, shop with 60 earlier pours and the 20 matches above] ${toTarget.length} zones: median ΔE00 predicted vs measured ${median(predVsMeasured).toFixed(2)}, median ΔE00 to target ${median(toTarget).toFixed(2)}`);
+    expect(median(toTarget)).toBeLessThanOrEqual(4);
+  }, 900_000);
 });
