@@ -24,3 +24,11 @@ export function dose(v: number, unit: string): string {
   const main = `${amount(v)} ${unitLabel(unit)}`;
   return frac ? `${main} (${frac})` : main;
 }
+
+// A batch volume in the shop's batch size unit (team setting), from cups.
+const CUPS_PER: Record<string, number> = { cups: 1, floz: 1 / 8, gal: 16, ml: 1 / 236.5882365 };
+const VOLUME: Record<string, string> = { cups: 'cups', floz: 'fl oz', gal: 'gal', ml: 'mL' };
+export function volume(cups: number, unit: string = 'cups'): string {
+  const v = cups / (CUPS_PER[unit] ?? 1);
+  return `${unit === 'ml' ? v.toFixed(0) : amount(v)} ${VOLUME[unit] ?? unit}`;
+}

@@ -1,4 +1,4 @@
-import { and, desc, eq, inArray } from 'drizzle-orm';
+import { and, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { DB } from '../open';
 import { colorants, stockMovements, users } from '../schema';
 
@@ -14,7 +14,7 @@ export function listMovements(database: Reader, teamId: string, colorantId: stri
     .from(stockMovements)
     .leftJoin(users, eq(users.id, stockMovements.createdBy))
     .where(and(eq(stockMovements.teamId, teamId), eq(stockMovements.colorantId, colorantId)))
-    .orderBy(desc(stockMovements.createdAt), desc(stockMovements.id))
+    .orderBy(desc(stockMovements.createdAt), desc(sql`rowid`))
     .limit(limit)
     .all();
 }
@@ -30,4 +30,15 @@ export function batchMovements(database: Reader, teamId: string, batchIds: strin
     .innerJoin(colorants, eq(colorants.id, stockMovements.colorantId))
     .where(and(eq(stockMovements.teamId, teamId), inArray(stockMovements.batchId, batchIds)))
     .all();
+}
+
+// One colorant's stock (archived ones too: their ledger stays readable).
+export function getStock(database: Reader, teamId: string, colorantId: string) {
+  const c = database
+    .select({ id: colorants.id, name: colorants.name, unit: colorants.unit, stock: colorants.stock, lowStockAt: colorants.lowStockAt })
+    .from(colorants)
+    .where(and(eq(colorants.id, colorantId), eq(colorants.teamId, teamId)))
+    .get();
+  if (!c) return null;
+  return { ...c, low: c.stock !== null && c.lowStockAt !== null && c.stock < c.lowStockAt };
 }

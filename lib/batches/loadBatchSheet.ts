@@ -1,10 +1,11 @@
-import { and, asc, eq, isNull, or } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { BatchView } from '@/db/queries/batches';
 import { getRecipe } from '@/db/queries/pours';
 import { molds, pours, teams, zones as zoneTable } from '@/db/schema';
 import { standardZones } from './logBatch';
 import { buildBatchSheet } from './buildBatchSheet';
+import { zoneCupsProblem } from '@/lib/recipes';
 
 // The data of a batch's printable sheet: the batch, the standard it was
 // poured to, and the sheet arithmetic with the team's dropper and sprue
@@ -33,6 +34,15 @@ export function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
       const s = samples.find((x) => x.zone === z.name);
       return { name: z.name, lab: s ? { l: s.l, a: s.a, b: s.b } : null, hex: s?.hex ?? null };
     });
+  const planIds = (batch.plan ?? []).map((p) => p.moldId);
+  const planRows = planIds.length
+    ? database.select({ id: molds.id, name: molds.name, cavities: molds.cavities, mlPerCavity: molds.mlPerCavity, thickness: molds.thickness })
+      .from(molds).where(and(eq(molds.teamId, teamId), inArray(molds.id, planIds))).all()
+    : [];
+  const plan = (batch.plan ?? []).flatMap((p) => {
+    const m = planRows.find((r) => r.id === p.moldId);
+    return m && m.cavities >= 1 && m.mlPerCavity > 0 ? [{ ...m, shots: p.shots }] : [];
+  });
   const sheet = buildBatchSheet({
     cups: batch.cups,
     dropsPerMl: team.dropsPerMl,
@@ -42,9 +52,15 @@ export function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
     molds: moldRows,
     selectedMoldId,
     tempF: std.tempF,
+    zoneCups: zoneCupsProblem(batch.cups, zones.map((z) => z.name), batch.zoneCups) ? null : batch.zoneCups,
+    plan: plan.length ? plan : null,
+    volumeUnit: team.volumeUnit,
   });
   return {
     batch: { id: batch.id, createdAt: batch.createdAt, createdBy: batch.createdBy, pass: batch.pass, baits: batch.baits, baitsExpected: batch.baitsExpected, notes: batch.notes },
+    cost: batch.cost,
+    stock: batch.stock,
+    belowZero: batch.belowZero,
     match: { id: batch.matchId, name: batch.matchName, tolerance: batch.tolerance },
     standard: { pourId: std.id, number: std.number, moldId: std.moldId, batchCups: std.batchCups },
     ...sheet,

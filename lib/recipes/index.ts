@@ -6,3 +6,4 @@ export { convertDose } from './convertDose';
 export { planRun, type RunPlan, type RunPlanInput, type PlanMoldInput, type PlanZoneInput, type PlannedMold, type PlannedZone } from './planRun';
 export { batchDraws, type Draw, type DrawColorant, type DrawLine, type Undrawn } from './batchDraws';
 export { batchCost, type BatchCost, type CostMold } from './batchCost';
+export { encodeBatchPrefill, decodeBatchPrefill, type BatchPrefill } from './batchPrefill';
