@@ -45,3 +45,18 @@ export function costOfBatch(
   cost.complete = cost.missing.length === 0;
   return cost;
 }
+
+// What one cup of a standard costs (its zones split evenly, plastisol from the
+// shop's default base) and a bait of it in the standard's mold.
+export function standardCost(database: Reader, teamId: string, opts: { standardPourId: string; zones: string[]; mold: CostMold | null; dropsPerMl: number; sprueAllowanceMl: number }) {
+  const names = opts.zones.length ? opts.zones : [''];
+  return costOfBatch(database, teamId, {
+    standardPourId: opts.standardPourId,
+    zoneCups: names.map((zone) => ({ zone, cups: 1 / names.length })),
+    base: defaultBase(database, teamId),
+    dropsPerMl: opts.dropsPerMl,
+    sprueAllowanceMl: opts.sprueAllowanceMl,
+    molds: opts.mold ? [opts.mold] : [],
+    baits: null,
+  });
+}
