@@ -14,7 +14,7 @@ export function listMovements(database: Reader, teamId: string, colorantId: stri
     .from(stockMovements)
     .leftJoin(users, eq(users.id, stockMovements.createdBy))
     .where(and(eq(stockMovements.teamId, teamId), eq(stockMovements.colorantId, colorantId)))
-    .orderBy(desc(stockMovements.createdAt), desc(sql`rowid`))
+    .orderBy(desc(stockMovements.createdAt), desc(sql`"stock_movements"."rowid"`))
     .limit(limit)
     .all();
 }
