@@ -8,6 +8,7 @@ import { KIND_LABEL, amountOf, costPer, inches, lab } from './format';
 import { LibraryTable, RowName } from './library-table';
 import { RefreshError, RowActions, useLibrary } from './use-library';
 import { LowMark, StockPanel } from './stock-panel';
+import { CsvDownload, CsvImport } from './csv-tools';
 import { Button } from '@/components/ui/button';
 import { useState } from 'react';
 
@@ -39,6 +40,10 @@ export function ColorantLibrary({ initial, canEdit }: { initial: ColorantView[];
           )}
         </EditorPanel>
       ) : null}
+      <div className="flex flex-wrap gap-2">
+        <CsvDownload what="colorants" />
+        {canEdit ? <CsvImport what="colorants" onImported={refresh} /> : null}
+      </div>
       {stockFor ? <StockPanel key={stockFor} colorantId={stockFor} canEdit={canEdit} onClose={() => setStockFor(null)} onMoved={refresh} /> : null}
       <RefreshError error={lib.error} />
       <LibraryTable headers={HEADERS} numeric={NUMERIC} caption="Colorant library" empty={rows.length === 0 ? (canEdit ? 'The library is empty. Add the plastisol base first, then the pigments, pearls and flakes your recipes use.' : 'The library is empty; a lead or the owner adds colorants.') : null}>

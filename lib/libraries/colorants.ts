@@ -17,7 +17,7 @@ const blankToNull = (s: string | null | undefined) => (s ? s : null);
 // The stored columns of a complete colorant. A flake size or colour means
 // nothing on a pigment or a base, so they are kept only for a flake: turning
 // a flake into a pearl drops them rather than leaving a stale size behind.
-function toColumns(c: ColorantInput): Columns {
+export function colorantColumns(c: ColorantInput): Columns {
   const flake = c.kind === 'flake';
   return {
     name: c.name,
@@ -48,7 +48,7 @@ export function createColorant(database: DB, member: Member, input: ColorantInpu
   try {
     return database.transaction((tx) => {
       assertNameFree('colorant', input.name, findColorantByName(tx, teamId, input.name));
-      tx.insert(colorants).values({ id, teamId, ...toColumns(input), stock: null }).run();
+      tx.insert(colorants).values({ id, teamId, ...colorantColumns(input), stock: null }).run();
       // Stock enters through the ledger: the opening count is its first movement.
       if (input.stock !== null && input.stock !== undefined) {
         moveStock(tx, { teamId, colorantId: id, kind: 'adjustment', amount: input.stock, note: 'opening stock', createdBy: member.user.id });
@@ -73,7 +73,7 @@ export function updateColorant(database: DB, member: Member, id: string, patch: 
       const merged: ColorantInput = { ...current, ...changes };
       assertFlakeSized(merged);
       if (changes.name !== undefined) assertNameFree('colorant', changes.name, findColorantByName(tx, teamId, changes.name, id));
-      const { stock: _stock, ...columns } = toColumns(merged);
+      const { stock: _stock, ...columns } = colorantColumns(merged);
       tx.update(colorants).set(columns).where(eq(colorants.id, id)).run();
       // A stock typed into the form is a count of the shelf: the difference
       // goes into the ledger as an adjustment; blank stops keeping stock.

@@ -5,6 +5,7 @@ import { getTeamSettings } from '@/db/queries/teams';
 import { standardCost } from '@/lib/batches/batchMaterials';
 import { StandardsList } from '@/components/production/standards-list';
 import { requirePageMember } from '@/lib/auth/current';
+import { CsvDownload } from '@/components/library/csv-tools';
 
 export const metadata = { title: 'Standards' };
 
@@ -31,6 +32,7 @@ export default async function StandardsPage() {
           The shop’s approved colours: the recipe a lead signed off, and how its production batches have gone. Colours in CIELAB (D65 white,
           measured from sRGB), as sampled on the standard pour’s photo; flake and glare left out.
         </p>
+        <div className="mt-2"><CsvDownload what="standards" label="Download standards and recipes (CSV)" /></div>
       </div>
       <StandardsList standards={standards} />
     </section>
