@@ -30,5 +30,6 @@ const CUPS_PER: Record<string, number> = { cups: 1, floz: 1 / 8, gal: 16, ml: 1 
 const VOLUME: Record<string, string> = { cups: 'cups', floz: 'fl oz', gal: 'gal', ml: 'mL' };
 export function volume(cups: number, unit: string = 'cups'): string {
   const v = cups / (CUPS_PER[unit] ?? 1);
-  return `${unit === 'ml' ? v.toFixed(0) : amount(v)} ${VOLUME[unit] ?? unit}`;
+  const shown = unit === 'ml' ? v.toFixed(0) : amount(v);
+  return `${shown} ${unit === 'cups' && shown === '1' ? 'cup' : VOLUME[unit] ?? unit}`;
 }

@@ -129,3 +129,16 @@ describe('stock draws and cost', () => {
     expect(cost.molds[0]!.perBait).toBeCloseTo((expected / (6 * ML_PER_CUP)) * 10.5, 12);
   });
 });
+
+describe('"Log as batch" carries the plan in the URL', () => {
+  it('round-trips cups, each side’s cups, the plan and the mold', async () => {
+    const { decodeBatchPrefill, encodeBatchPrefill } = await import('../../lib/recipes');
+    const prefill = { cups: 2, zoneCups: [{ zone: 'back', cups: 1.25 }, { zone: 'belly', cups: 0.75 }], plan: [{ moldId: 'm 1', shots: 5 }, { moldId: 'm2', shots: 3 }], moldId: 'm 1' };
+    const q = new URLSearchParams(encodeBatchPrefill(prefill));
+    expect(q.get('log')).toBe('batch');
+    expect(decodeBatchPrefill(q)).toEqual(prefill);
+    expect(decodeBatchPrefill(new URLSearchParams('batch=x'))).toBeNull();
+    // Nonsense is dropped, not guessed: no negative cups, no fractional shots.
+    expect(decodeBatchPrefill(new URLSearchParams('log=batch&cups=-1&zoneCups=back:x&plan=m1:2.5'))).toEqual({ cups: null, zoneCups: null, plan: null, moldId: null });
+  });
+});
