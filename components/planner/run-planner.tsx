@@ -47,7 +47,7 @@ export function RunPlanner({ standards, molds, settings, initialMatchId }: { sta
       sprueAllowanceMl: settings.sprueAllowanceMl,
       dropsPerMl: settings.dropsPerMl,
       zones: zones.map((z) => ({ zone: z, weight: Number(shares[z] || 1) })),
-      recipe: std.recipe,
+      recipe: std.recipe.map((l) => ({ ...l, name: l.colorant })),
       stepCups: stepFor(unit),
     });
   } catch (e) {
