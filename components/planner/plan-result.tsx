@@ -16,7 +16,7 @@ export function PlanResult({ plan, std, unit, laminate }: { plan: RunPlan; std: 
     cups: plan.mixedCups,
     zoneCups: laminate ? plan.zones.map((z) => ({ zone: z.zone, cups: z.cups })) : null,
     plan: used.map((m) => ({ moldId: m.id, shots: m.shots })),
-    moldId: used[0]?.id ?? null,
+    moldId: used.find((m) => m.id === std.moldId)?.id ?? used[0]?.id ?? null,
   })}`;
   return (
     <section aria-label="Run plan" className="space-y-3 rounded-lg border border-panel-line bg-white p-4">

@@ -83,16 +83,19 @@ export function RunPlanner({ standards, molds, settings, initialMatchId }: { sta
           <legend className="mb-1 text-sm font-medium">Molds on the bench{direction === 'baits' ? ' and shots of each' : ' (filled in turn, one shot of each)'}</legend>
           <ul className="space-y-2">
             {molds.map((m) => (
-              <li key={m.id} className="grid grid-cols-[1fr_auto] items-center gap-2 rounded-md border border-panel-line p-2">
+              <li key={m.id} className="grid grid-cols-[minmax(0,1fr)_5.5rem] items-center gap-2 rounded-md border border-panel-line p-2">
                 <label className="flex min-h-tap items-center gap-3">
                   <input type="checkbox" checked={row(m.id).on} onChange={(e) => setRow(m.id, { on: e.target.checked })} className="h-5 w-5 shrink-0" />
-                  <span>{m.name}<span className="num block text-xs text-ink-soft">{m.cavities} × {m.mlPerCavity} mL{settings.sprueAllowanceMl ? ` + ${settings.sprueAllowanceMl} mL sprue` : ''} a shot</span></span>
+                  <span className="min-w-0">{m.name}<span className="num block text-xs text-ink-soft">{m.cavities} × {m.mlPerCavity} mL{settings.sprueAllowanceMl ? ` + ${settings.sprueAllowanceMl} mL sprue` : ''} a shot</span></span>
                 </label>
                 {direction === 'baits' && row(m.id).on ? (
-                  <input
-                    type="number" inputMode="numeric" min="0" step="1" aria-label={`Shots of ${m.name}`} placeholder="shots"
-                    value={row(m.id).shots} onChange={(e) => setRow(m.id, { shots: e.target.value })} className={`${inputClass} w-24`}
-                  />
+                  <label className="block text-center text-xs text-ink-soft">
+                    <input
+                      type="number" inputMode="numeric" min="0" step="1" aria-label={`Shots of ${m.name}`}
+                      value={row(m.id).shots} onChange={(e) => setRow(m.id, { shots: e.target.value })} className={`${inputClass} text-center`}
+                    />
+                    shots{Number(row(m.id).shots) > 0 ? ` → ${Number(row(m.id).shots) * m.cavities} baits` : ''}
+                  </label>
                 ) : null}
               </li>
             ))}
