@@ -1,3 +1,5 @@
+import { fromCups, VOLUME_LABEL, type VolumeUnit } from '@/lib/recipes/units';
+
 // Doses as a pourer reads them: whole drops where the number is whole, up to
 // two decimals otherwise; teaspoons also as the nearest eighth when it is
 // within 0.01 tsp of one (measuring spoons come in eighths and quarters).
@@ -26,10 +28,8 @@ export function dose(v: number, unit: string): string {
 }
 
 // A batch volume in the shop's batch size unit (team setting), from cups.
-const CUPS_PER: Record<string, number> = { cups: 1, floz: 1 / 8, gal: 16, ml: 1 / 236.5882365 };
-const VOLUME: Record<string, string> = { cups: 'cups', floz: 'fl oz', gal: 'gal', ml: 'mL' };
-export function volume(cups: number, unit: string = 'cups'): string {
-  const v = cups / (CUPS_PER[unit] ?? 1);
+export function volume(cups: number, unit: VolumeUnit = 'cups'): string {
+  const v = fromCups(cups, unit);
   const shown = unit === 'ml' ? v.toFixed(0) : amount(v);
-  return `${shown} ${unit === 'cups' && shown === '1' ? 'cup' : VOLUME[unit] ?? unit}`;
+  return `${shown} ${unit === 'cups' && shown === '1' ? 'cup' : VOLUME_LABEL[unit]}`;
 }

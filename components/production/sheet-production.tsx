@@ -1,4 +1,5 @@
 import { money } from '@/components/library/format';
+import { ML_PER_CUP } from '@/lib/recipes/units';
 import { amount, unitLabel, volume } from './dose';
 import type { Sheet } from './sheet-tables';
 
@@ -31,7 +32,7 @@ export function SheetPlan({ sheet }: { sheet: Sheet }) {
       <p className="mt-1 text-sm">
         {plan.shortMl > 0
           ? <span className="font-semibold"><span aria-hidden>▲ </span>The batch is {plan.shortMl.toFixed(0)} mL short of the plan: mix more or pour fewer shots.</span>
-          : `Left over after the plan: ${plan.leftoverMl.toFixed(0)} mL (${volume(plan.leftoverMl / 236.5882365, sheet.volumeUnit)}).`}
+          : `Left over after the plan: ${plan.leftoverMl.toFixed(0)} mL (${volume(plan.leftoverMl / ML_PER_CUP, sheet.volumeUnit)}).`}
         {' '}Sprue: {plan.sprueMl.toFixed(0)} mL of the total.
       </p>
     </div>
