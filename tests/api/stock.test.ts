@@ -1,6 +1,8 @@
-import { beforeAll, describe, expect, it } from 'vitest';
+import Database from 'better-sqlite3';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
 import { api, expectErrorShape } from '../support/http';
-import { shopWithStandard } from '../support/shop';
+import { twoTonePng, uploadPhoto } from '../support/photos';
+import { COLOURS, ZONES, shopWithStandard } from '../support/shop';
 
 // 1 cup = 231 in³ × 16.387064 mL/in³ ÷ 16 (NIST Handbook 44, Appendix C).
 const ML_PER_CUP = (231 * 25.4 ** 3) / 1000 / 16;
@@ -90,5 +92,28 @@ describe('stock that moves with batches', () => {
     expect(now.low).toBe(false);
     expect(now.movements.slice(0, 2).map((m: any) => [m.kind, m.note])).toEqual([['adjustment', 'spilled'], ['delivery', 'two bottles']]);
     expect((await api('/api/colorants/nope/stock', { cookie: s.cookie })).status).toBe(404);
+  });
+
+  it('test pours draw from stock only when the shop’s setting says so', async () => {
+    const pour = async () => {
+      const photo = await uploadPhoto(s.cookie, await twoTonePng(COLOURS.back, COLOURS.belly), 'pour');
+      const recipe = [{ zone: 'back', colorantId: s.pigment.id, amount: 4, unit: 'drops' }];
+      const res = await api(`/api/matches/${s.match.id}/pours`, { cookie: s.cookie, body: { photoId: photo.id, recipe, batchCups: 2, zones: ZONES } });
+      expect(res.status, JSON.stringify(res.body)).toBe(201);
+      return res.body.id as string;
+    };
+    const before = (await s.stockOf(s.pigment.id)).stock;
+    const baseBefore = (await s.stockOf(s.base.id)).stock;
+    await pour();
+    expect((await s.stockOf(s.pigment.id)).stock).toBe(before); // the setting is off in a new shop
+    // The owner ticks "test pours draw from stock" (set here in the database; the form is tested in the browser).
+    const raw = new Database(inject('dbFile'));
+    raw.prepare('update teams set stock_draws_pours = 1 where id = ?').run(s.shop.body.team.id);
+    raw.close();
+    const id = await pour();
+    const after = await s.stockOf(s.pigment.id);
+    expect(after.stock).toBeCloseTo(before - 4 * 1, 9); // 2 cups split evenly: 1 cup of back at 4 drops per cup
+    expect(after.movements[0]).toMatchObject({ kind: 'pour', pourId: id });
+    expect((await s.stockOf(s.base.id)).stock).toBeCloseTo(baseBefore - 2 * ML_PER_CUP, 6);
   });
 });
