@@ -49,7 +49,7 @@ export function ColorantLibrary({ initial, canEdit }: { initial: ColorantView[];
       <LibraryTable headers={HEADERS} numeric={NUMERIC} caption="Colorant library" empty={rows.length === 0 ? (canEdit ? 'The library is empty. Add the plastisol base first, then the pigments, pearls and flakes your recipes use.' : 'The library is empty; a lead or the owner adds colorants.') : null}>
         {rows.map((c) => (
           <tr key={c.id} className="border-t border-panel-line align-top">
-            <RowName name={c.name}>
+            <RowName name={c.name} sub={c.stock === null ? undefined : `${amountOf(c.stock, c.unit)} on the shelf${isLow(c) ? ' · ▼ low' : ''}`}>
               {canEdit ? <RowActions path={`${KEY}/${c.id}`} name={c.name} what="colorant" onEdit={() => editor.edit(c.id)} onArchived={refresh} /> : null}
               <Button type="button" variant="secondary" onClick={() => setStockFor(c.id)} aria-label={`Stock of ${c.name}`}>Stock</Button>
             </RowName>

@@ -1,5 +1,6 @@
 'use client';
 
+import Link from 'next/link';
 import { useEffect, useRef, useState } from 'react';
 import useSWR from 'swr';
 import { day } from '@/components/production/when';
@@ -70,7 +71,7 @@ export function StockPanel({ colorantId, canEdit, onClose, onMoved }: { colorant
                   {data.movements.map((m) => (
                     <tr key={m.id} className="border-t border-panel-line align-top">
                       <td className="num py-1 pr-2">{day(m.createdAt)}</td>
-                      <td className="pr-2">{KIND[m.kind]}{m.note ? ` — ${m.note}` : ''}{m.by ? <span className="block text-xs text-ink-soft">{m.by}</span> : null}</td>
+                      <td className="pr-2">{m.batchId ? <Link href={`/batches/${m.batchId}/sheet`} className="underline underline-offset-4">{KIND[m.kind]}</Link> : KIND[m.kind]}{m.note ? ` — ${m.note}` : ''}{m.by ? <span className="block text-xs text-ink-soft">{m.by}</span> : null}</td>
                       <td className="num whitespace-nowrap text-right">{m.amount > 0 ? '+' : '−'}{amountOf(Math.abs(m.amount), data.unit)}</td>
                       <td className="num whitespace-nowrap pl-2 text-right">{amountOf(m.balance, data.unit)}</td>
                     </tr>
