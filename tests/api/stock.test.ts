@@ -116,4 +116,15 @@ describe('stock that moves with batches', () => {
     expect(after.movements[0]).toMatchObject({ kind: 'pour', pourId: id });
     expect((await s.stockOf(s.base.id)).stock).toBeCloseTo(baseBefore - 2 * ML_PER_CUP, 6);
   });
+
+  it('a colorant whose stock the shop does not keep is not drawn into negative figures', async () => {
+    const t = await shopWithStandard({ flakeStock: null });
+    const res = await t.logBatch({ cups: 2 });
+    expect(res.status).toBe(201);
+    const flake = await t.stockOf(t.flake.id);
+    expect(flake.stock).toBeNull();
+    expect(flake.movements).toEqual([]);
+    expect(res.body.stock.map((m: any) => m.name).sort()).toEqual(['Base, medium', 'Pigment, moss']);
+    expect(res.body.belowZero).toEqual([]);
+  });
 });

@@ -8,7 +8,7 @@ export const COLOURS = { back: labToRgb8({ l: 38, a: 10, b: 22 }), belly: labToR
 // A fresh shop of its own (so no other test moves its stock) with a small
 // library and one approved two-zone standard: back 6 drops pigment + ¼ tsp
 // flake per cup, belly 2 drops pigment per cup.
-export async function shopWithStandard(opts: { flakeStock?: number } = {}) {
+export async function shopWithStandard(opts: { flakeStock?: number | null } = {}) {
   const shop = await signUpShop('Stock test shop');
   const cookie = shop.cookie;
   const add = async (path: string, body: object) => {
@@ -18,7 +18,7 @@ export async function shopWithStandard(opts: { flakeStock?: number } = {}) {
   };
   const base = await add('/api/colorants', { name: 'Base, medium', kind: 'base', unit: 'ml', costPerUnit: 0.01, stock: 5000 });
   const pigment = await add('/api/colorants', { name: 'Pigment, moss', kind: 'pigment', unit: 'drops', costPerUnit: 0.02, stock: 200, lowStockAt: 150 });
-  const flake = await add('/api/colorants', { name: 'Flake, black', kind: 'flake', unit: 'tsp', stock: opts.flakeStock ?? 10, flakeSizeIn: 0.015 });
+  const flake = await add('/api/colorants', { name: 'Flake, black', kind: 'flake', unit: 'tsp', stock: opts.flakeStock === undefined ? 10 : opts.flakeStock, flakeSizeIn: 0.015 });
   const mold = await add('/api/molds', { name: 'Stick worm 5 in', bodyStyle: 'stick worm', cavities: 4, mlPerCavity: 9.5, thickness: 'standard' });
   const match = await add('/api/matches', { name: 'Moss over cream', zones: ['back', 'belly'] });
   const ref = await uploadPhoto(cookie, await twoTonePng(COLOURS.back, COLOURS.belly), 'reference');
