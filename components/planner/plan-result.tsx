@@ -2,6 +2,9 @@ import Link from 'next/link';
 import { dose, volume } from '@/components/production/dose';
 import { encodeBatchPrefill, ML_PER_CUP, VOLUME_LABEL, type RunPlan, type VolumeUnit } from '@/lib/recipes';
 import type { PlannerStandard } from './run-planner';
+import { PlanMaterials, type PlannerColorant } from './plan-materials';
+
+export type Shelf = { colorants: PlannerColorant[]; baseId: string | null; currency: string; dropsPerMl: number; sprueAllowanceMl: number };
 
 const th = 'border-b border-panel-line p-2 text-left font-semibold';
 const td = 'border-b border-panel-line p-2 align-top';
@@ -10,7 +13,7 @@ const mlOf = (ml: number) => `${ml.toFixed(0)} mL`;
 // What a run plan comes to: yield per mold and in all, plastisol per side
 // with its scaled recipe, sprue and leftover, and a link that opens the batch
 // form pre-filled with it.
-export function PlanResult({ plan, std, unit, laminate }: { plan: RunPlan; std: PlannerStandard; unit: VolumeUnit; laminate: boolean }) {
+export function PlanResult({ plan, std, unit, laminate, shelf }: { plan: RunPlan; std: PlannerStandard; unit: VolumeUnit; laminate: boolean; shelf: Shelf }) {
   const used = plan.molds.filter((m) => m.shots > 0);
   const href = `/matches/${std.matchId}?${encodeBatchPrefill({
     cups: plan.mixedCups,
@@ -55,6 +58,7 @@ export function PlanResult({ plan, std, unit, laminate }: { plan: RunPlan; std: 
         ))}
         <p className="text-xs">{plan.direction === 'baits' ? `Each side is rounded up to a whole ${unit === 'ml' ? '10 mL' : '¼ cup'}: the leftover is what that rounding adds.` : 'What is left over is less than one more shot of any mold.'} In {VOLUME_LABEL[unit]}, the shop’s batch size unit; {ML_PER_CUP.toFixed(2)} mL a cup.</p>
       </div>
+      <PlanMaterials plan={plan} std={std} {...shelf} />
       <Link href={href} className="inline-flex min-h-tap items-center rounded-md bg-accent px-4 font-medium text-white">Log as batch</Link>
     </section>
   );

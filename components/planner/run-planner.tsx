@@ -5,11 +5,11 @@ import { HeatCaution } from '@/components/safety/heat-caution';
 import { Field, inputClass } from '@/components/ui/field';
 import type { DoseUnit } from '@/db/schema';
 import { ML_PER_CUP, planRun, toCups, VOLUME_LABEL, type RunPlan, type VolumeUnit } from '@/lib/recipes';
-import { PlanResult } from './plan-result';
+import { PlanResult, type Shelf } from './plan-result';
 
 export type PlannerStandard = { matchId: string; name: string; moldId: string | null; zones: { name: string }[]; recipe: { zone: string; colorantId: string; colorant: string; amount: number; unit: DoseUnit }[] };
 export type PlannerMold = { id: string; name: string; cavities: number; mlPerCavity: number };
-export type PlannerSettings = { volumeUnit: VolumeUnit; dropsPerMl: number; sprueAllowanceMl: number };
+export type PlannerSettings = { volumeUnit: VolumeUnit; dropsPerMl: number; sprueAllowanceMl: number; currency: string };
 
 type Row = { on: boolean; shots: string };
 
@@ -20,7 +20,9 @@ const stepFor = (unit: VolumeUnit) => (unit === 'ml' ? 10 / ML_PER_CUP : 0.25);
 // The run planner: pick a standard and the molds on the bench, then either
 // "I want these baits" (shots of each mold → plastisol per side) or "I have
 // this much plastisol" (→ shots of each mold in turn, baits, leftover).
-export function RunPlanner({ standards, molds, settings, initialMatchId }: { standards: PlannerStandard[]; molds: PlannerMold[]; settings: PlannerSettings; initialMatchId?: string | null }) {
+export function RunPlanner({ standards, molds, settings, shelf, initialMatchId }: {
+  standards: PlannerStandard[]; molds: PlannerMold[]; settings: PlannerSettings; shelf: Pick<Shelf, 'colorants' | 'baseId'>; initialMatchId?: string | null;
+}) {
   const unit = settings.volumeUnit;
   const first = standards.find((s) => s.matchId === initialMatchId) ?? standards[0];
   const [matchId, setMatchId] = useState(first?.matchId ?? '');
@@ -115,7 +117,7 @@ export function RunPlanner({ standards, molds, settings, initialMatchId }: { sta
           </fieldset>
         ) : null}
       </section>
-      {plan ? <PlanResult plan={plan} std={std} unit={unit} laminate={zones.length > 1} /> : <p role="status" className="rounded-lg border border-panel-line bg-white p-4">{problem}</p>}
+      {plan ? <PlanResult plan={plan} std={std} unit={unit} laminate={zones.length > 1} shelf={{ ...shelf, currency: settings.currency, dropsPerMl: settings.dropsPerMl, sprueAllowanceMl: settings.sprueAllowanceMl }} /> : <p role="status" className="rounded-lg border border-panel-line bg-white p-4">{problem}</p>}
       <HeatCaution compact />
     </div>
   );

@@ -35,6 +35,10 @@ describe.runIf(browserAvailable())('a run of three molds, planned on a phone and
     expect(planText).toContain('363 mL');
     expect(planText).toContain('back: 1 cup (237 mL)');
     expect(planText).toContain('6 drops Pigment, moss');
+    // What the run takes from the shelf and costs, before anything is poured.
+    expect(planText).toContain('Pigment, moss: 8 drops of 200 on the shelf'); // 6 drops × 1 cup + 2 drops × 1 cup
+    expect(planText).toMatch(/per bait/);
+    expect(planText).toContain('No cost in the library for Flake, black');
     await page.getByRole('note', { name: 'Safety caution' }).waitFor();
     await page.screenshot({ path: artifactPath('run-plan-390.png'), fullPage: true });
 

@@ -1,5 +1,6 @@
 import { db } from '@/db';
-import { listMolds } from '@/db/queries/libraries';
+import { listColorants, listMolds } from '@/db/queries/libraries';
+import { defaultBase } from '@/lib/batches/batchMaterials';
 import { listStandards } from '@/db/queries/standards';
 import { getTeamSettings } from '@/db/queries/teams';
 import { RunPlanner } from '@/components/planner/run-planner';
@@ -12,6 +13,7 @@ export default async function PlanPage({ searchParams }: { searchParams: Promise
   const settings = getTeamSettings(db(), member.team.id)!;
   const standards = listStandards(db(), member.team.id).map((s) => ({ matchId: s.matchId, name: s.name, moldId: s.moldId, zones: s.zones.map((z) => ({ name: z.name })), recipe: s.recipe }));
   const molds = listMolds(db(), member.team.id).map((m) => ({ id: m.id, name: m.name, cavities: m.cavities, mlPerCavity: m.mlPerCavity }));
+  const colorants = listColorants(db(), member.team.id).map((c) => ({ id: c.id, name: c.name, unit: c.unit, costPerUnit: c.costPerUnit, stock: c.stock }));
   return (
     <section className="space-y-4">
       <div>
@@ -21,7 +23,8 @@ export default async function PlanPage({ searchParams }: { searchParams: Promise
       <RunPlanner
         standards={standards}
         molds={molds}
-        settings={{ volumeUnit: settings.volumeUnit, dropsPerMl: settings.dropsPerMl, sprueAllowanceMl: settings.sprueAllowanceMl }}
+        settings={{ volumeUnit: settings.volumeUnit, dropsPerMl: settings.dropsPerMl, sprueAllowanceMl: settings.sprueAllowanceMl, currency: settings.currency }}
+        shelf={{ colorants, baseId: defaultBase(db(), member.team.id)?.id ?? null }}
         initialMatchId={(await searchParams).standard ?? null}
       />
     </section>
