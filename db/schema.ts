@@ -37,6 +37,10 @@ export const teams = sqliteTable('teams', {
   // Drops per millilitre depend on the dropper; about 20 is common practice.
   dropsPerMl: real('drops_per_ml').notNull().default(20),
   sprueAllowanceMl: real('sprue_allowance_ml').notNull().default(0),
+  // The shop's currency for colorant and plastisol costs (ISO 4217 code).
+  currency: text('currency').notNull().default('USD'),
+  // Whether a test pour with a batch size draws its doses from stock too.
+  stockDrawsPours: integer('stock_draws_pours', { mode: 'boolean' }).notNull().default(false),
   createdAt: integer('created_at').notNull().default(now),
 });
 
@@ -112,6 +116,8 @@ export const colorants = sqliteTable(
     unit: text('unit', { enum: DOSE_UNITS }).notNull(),
     costPerUnit: real('cost_per_unit'),
     stock: real('stock'),
+    // Below this much stock (in the colorant's unit) the library marks it low.
+    lowStockAt: real('low_stock_at'),
     flakeSizeIn: real('flake_size_in'),
     flakeColor: text('flake_color'),
     swatchL: real('swatch_l'),
@@ -246,6 +252,11 @@ export const batches = sqliteTable(
     cups: real('cups').notNull(),
     baitsExpected: integer('baits_expected'),
     baitsActual: integer('baits_actual'),
+    // Cups of each zone's colour ([{ zone, cups }]); null: the batch split evenly.
+    zoneCups: text('zone_cups', { mode: 'json' }).$type<{ zone: string; cups: number }[]>(),
+    // The run plan the batch was poured to ([{ moldId, shots }]), or null.
+    plan: text('plan', { mode: 'json' }).$type<{ moldId: string; shots: number }[]>(),
+    baseColorantId: text('base_colorant_id').references(() => colorants.id, { onDelete: 'set null' }),
     pass: integer('pass', { mode: 'boolean' }).notNull(),
     notes: text('notes'),
     createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
@@ -334,6 +345,30 @@ export const signOffs = sqliteTable(
     createdAt: integer('created_at').notNull().default(now),
   },
   (t) => [index('sign_offs_match_idx').on(t.matchId)],
+);
+
+export const STOCK_MOVEMENT_KINDS = ['batch', 'pour', 'adjustment', 'delivery'] as const;
+export type StockMovementKind = (typeof STOCK_MOVEMENT_KINDS)[number];
+
+// The ledger of stock: every draw (a batch, a test pour), delivery and manual
+// adjustment, signed, in the colorant's unit. colorants.stock is the running
+// balance, changed only together with a movement in one transaction.
+export const stockMovements = sqliteTable(
+  'stock_movements',
+  {
+    id: text('id').primaryKey(),
+    teamId: text('team_id').notNull().references(() => teams.id, { onDelete: 'cascade' }),
+    colorantId: text('colorant_id').notNull().references(() => colorants.id, { onDelete: 'cascade' }),
+    kind: text('kind', { enum: STOCK_MOVEMENT_KINDS }).notNull(),
+    amount: real('amount').notNull(),
+    balance: real('balance').notNull(),
+    batchId: text('batch_id').references(() => batches.id, { onDelete: 'set null' }),
+    pourId: text('pour_id').references(() => pours.id, { onDelete: 'set null' }),
+    note: text('note'),
+    createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: integer('created_at').notNull().default(now),
+  },
+  (t) => [index('stock_movements_colorant_idx').on(t.colorantId, t.createdAt), index('stock_movements_team_idx').on(t.teamId)],
 );
 
 export const auditEvents = sqliteTable(
@@ -443,5 +478,6 @@ export type RecipeLine = typeof recipeLines.$inferSelect;
 export type Batch = typeof batches.$inferSelect;
 export type Sample = typeof samples.$inferSelect;
 export type SignOff = typeof signOffs.$inferSelect;
+export type StockMovement = typeof stockMovements.$inferSelect;
 export type AuditEvent = typeof auditEvents.$inferSelect;
 export type OutgoingMail = typeof outgoingMail.$inferSelect;

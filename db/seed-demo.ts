@@ -1,6 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { hashPassword } from '../lib/auth/password';
 import { newId } from '../lib/auth/tokens';
+import { moveStock } from '../lib/stock/moveStock';
 import type { DB } from './open';
 import { type Role, colorants, matches, memberships, molds, teams, users, zones } from './schema';
 
@@ -49,6 +50,9 @@ const MATCHES = [
   { name: 'Cinder minnow', zones: ['back', 'belly', 'tail'], notes: null },
 ];
 
+// Where the demo shop wants a reorder reminder, in each kind's usual unit.
+const LOW_STOCK_AT: Record<string, number> = { base: 1900, pigment: 450, pearl: 10, flake: 8, glow: 5 };
+
 export async function seedDemo(database: DB): Promise<boolean> {
   if (database.select({ id: teams.id }).from(teams).limit(1).get()) return false;
   const passwordHash = await hashPassword(DEMO_PASSWORD);
@@ -61,7 +65,12 @@ export async function seedDemo(database: DB): Promise<boolean> {
       tx.insert(users).values({ id: ids[p.role]!, email: p.email, name: p.name, passwordHash }).run();
       tx.insert(memberships).values({ id: newId(), teamId, userId: ids[p.role]!, role: p.role }).run();
     }
-    for (const c of COLORANTS) tx.insert(colorants).values({ id: newId(), teamId, ...c }).run();
+    for (const c of COLORANTS) {
+      const id = newId();
+      tx.insert(colorants).values({ id, teamId, ...c, stock: null, lowStockAt: LOW_STOCK_AT[c.kind] ?? null }).run();
+      // Stock enters through the ledger, as a delivery.
+      if (c.stock != null) moveStock(tx, { teamId, colorantId: id, kind: 'delivery', amount: c.stock, note: 'opening stock', createdBy: ids.owner ?? null });
+    }
     for (const m of MOLDS) tx.insert(molds).values({ id: newId(), teamId, ...m }).run();
     MATCHES.forEach((m, i) => {
       const matchId = newId();

@@ -11,6 +11,7 @@ const LINKS = [
   { href: '/colorants', label: 'Colorants' },
   { href: '/molds', label: 'Molds' },
   { href: '/standards', label: 'Standards' },
+  { href: '/plan', label: 'Run plan' },
   { href: '/batches', label: 'Batches' },
   { href: '/team', label: 'Team' },
   { href: '/calculator', label: 'Calculator' },

@@ -33,7 +33,7 @@ const SWATCH_LABEL = { l: 'L*', a: 'a*', b: 'b*' } as const;
 const validate = zodResolver(colorantSchema);
 const resolver: Resolver<Values, unknown, Output> = (values, ctx, opts) => validate(normalise(values), ctx, opts);
 
-const emptyValues = (kind: Values['kind'] = 'pigment'): Values => ({ name: '', kind, unit: USUAL_UNIT[kind], costPerUnit: null, stock: null, flakeSizeIn: null, flakeColor: '', swatch: undefined, notes: '' });
+const emptyValues = (kind: Values['kind'] = 'pigment'): Values => ({ name: '', kind, unit: USUAL_UNIT[kind], costPerUnit: null, stock: null, lowStockAt: null, flakeSizeIn: null, flakeColor: '', swatch: undefined, notes: '' });
 
 export function ColorantForm({ colorant, onSaved, onCancel }: { colorant?: ColorantView; onSaved: (c: ColorantView) => void | Promise<void>; onCancel?: () => void }) {
   const { register, handleSubmit, formState, watch, setValue, getFieldState, reset, setFocus, setError: setFieldError } = useForm<Values, unknown, Output>({
@@ -95,8 +95,11 @@ export function ColorantForm({ colorant, onSaved, onCancel }: { colorant?: Color
       <Field label={`Cost per ${perUnit(unit)}`} error={err.costPerUnit?.message} hint="Optional; in the shop's currency.">
         <input type="number" step="any" min="0" className={`${inputClass} num`} {...register('costPerUnit', num)} />
       </Field>
-      <Field label={`Stock (${unit === 'ml' ? 'mL' : unit})`} error={err.stock?.message} hint="Optional; how much is on the shelf.">
+      <Field label={`Stock (${unit === 'ml' ? 'mL' : unit})`} error={err.stock?.message} hint={colorant ? 'A new count goes into the stock ledger as an adjustment.' : 'Optional; how much is on the shelf.'}>
         <input type="number" step="any" min="0" className={`${inputClass} num`} {...register('stock', num)} />
+      </Field>
+      <Field label={`Low-stock mark (${unit === 'ml' ? 'mL' : unit})`} error={err.lowStockAt?.message} hint="Optional; below this the library marks it low.">
+        <input type="number" step="any" min="0" className={`${inputClass} num`} {...register('lowStockAt', num)} />
       </Field>
       <fieldset className="sm:col-span-2">
         <legend className="text-sm font-medium">Measured swatch, CIELAB (D65) — optional</legend>

@@ -7,6 +7,10 @@ import { EditorPanel } from './editor-panel';
 import { KIND_LABEL, amountOf, costPer, inches, lab } from './format';
 import { LibraryTable, RowName } from './library-table';
 import { RefreshError, RowActions, useLibrary } from './use-library';
+import { LowMark, StockPanel } from './stock-panel';
+import { CsvDownload, CsvImport } from './csv-tools';
+import { Button } from '@/components/ui/button';
+import { useState } from 'react';
 
 const KEY = '/api/colorants';
 const HEADERS = ['Name', 'Kind', 'Flake size and colour', 'Cost per unit', 'Stock', 'Swatch, CIELAB (D65)'];
@@ -22,6 +26,8 @@ export function ColorantLibrary({ initial, canEdit }: { initial: ColorantView[];
   const lib = useLibrary<ColorantView>(KEY, initial);
   const { editor, editing, refresh, savedEdit } = lib;
   const rows = [...lib.rows].sort(byKindThenName);
+  const [stockFor, setStockFor] = useState<string | null>(null);
+  const isLow = (c: ColorantView) => c.stock !== null && c.lowStockAt !== null && c.stock < c.lowStockAt;
 
   return (
     <div className="mt-4 space-y-4">
@@ -34,12 +40,18 @@ export function ColorantLibrary({ initial, canEdit }: { initial: ColorantView[];
           )}
         </EditorPanel>
       ) : null}
+      <div className="flex flex-wrap gap-2">
+        <CsvDownload what="colorants" />
+        {canEdit ? <CsvImport what="colorants" onImported={refresh} /> : null}
+      </div>
+      {stockFor ? <StockPanel key={stockFor} colorantId={stockFor} canEdit={canEdit} onClose={() => setStockFor(null)} onMoved={refresh} /> : null}
       <RefreshError error={lib.error} />
       <LibraryTable headers={HEADERS} numeric={NUMERIC} caption="Colorant library" empty={rows.length === 0 ? (canEdit ? 'The library is empty. Add the plastisol base first, then the pigments, pearls and flakes your recipes use.' : 'The library is empty; a lead or the owner adds colorants.') : null}>
         {rows.map((c) => (
           <tr key={c.id} className="border-t border-panel-line align-top">
-            <RowName name={c.name}>
+            <RowName name={c.name} sub={c.stock === null ? undefined : `${amountOf(c.stock, c.unit)} on the shelf${isLow(c) ? ' · ▼ low' : ''}`}>
               {canEdit ? <RowActions path={`${KEY}/${c.id}`} name={c.name} what="colorant" onEdit={() => editor.edit(c.id)} onArchived={refresh} /> : null}
+              <Button type="button" variant="secondary" onClick={() => setStockFor(c.id)} aria-label={`Stock of ${c.name}`}>Stock</Button>
             </RowName>
             <td className="p-3">
               {KIND_LABEL[c.kind]}
@@ -47,7 +59,10 @@ export function ColorantLibrary({ initial, canEdit }: { initial: ColorantView[];
             </td>
             <td className="p-3 text-right whitespace-nowrap">{c.flakeSizeIn === null ? '—' : `${inches(c.flakeSizeIn)}${c.flakeColor ? `, ${c.flakeColor}` : ''}`}</td>
             <td className="p-3 text-right whitespace-nowrap">{c.costPerUnit === null ? '—' : costPer(c.costPerUnit, c.unit)}</td>
-            <td className="p-3 text-right whitespace-nowrap">{c.stock === null ? '—' : amountOf(c.stock, c.unit)}</td>
+            <td className="p-3 text-right whitespace-nowrap">
+              {c.stock === null ? '—' : amountOf(c.stock, c.unit)}
+              {isLow(c) ? <span className="block"><LowMark /></span> : null}
+            </td>
             <td className="p-3 whitespace-pre">{c.swatch ? lab(c.swatch) : '—'}</td>
           </tr>
         ))}

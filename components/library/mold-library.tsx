@@ -6,6 +6,7 @@ import { inches, millilitres } from './format';
 import { LibraryTable, RowName } from './library-table';
 import { RefreshError, RowActions, useLibrary } from './use-library';
 import { MoldForm } from './mold-form';
+import { CsvDownload, CsvImport } from './csv-tools';
 
 const KEY = '/api/molds';
 const HEADERS = ['Name', 'Body style', 'Length', 'Cavities', 'Plastisol per cavity', 'Body thickness'];
@@ -27,6 +28,10 @@ export function MoldLibrary({ initial, canEdit }: { initial: MoldView[]; canEdit
           )}
         </EditorPanel>
       ) : null}
+      <div className="flex flex-wrap gap-2">
+        <CsvDownload what="molds" />
+        {canEdit ? <CsvImport what="molds" onImported={refresh} /> : null}
+      </div>
       <RefreshError error={error} />
       <LibraryTable headers={HEADERS} numeric={NUMERIC} caption="Mold library" empty={rows.length === 0 ? (canEdit ? 'No molds yet. Add the molds you pour with; yields and batch sheets work from them.' : 'No molds yet; a lead or the owner adds them.') : null}>
         {rows.map((m) => (

@@ -10,6 +10,7 @@ import type { MatchDetail } from '@/db/queries/matchDetail';
 import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { swrFetcher } from '@/lib/http/client';
+import type { VolumeUnit } from '@/lib/recipes';
 import { DeltaChart } from './delta-chart';
 import { PourCompare } from './pour-compare';
 import { PourForm } from './pour-form';
@@ -19,7 +20,7 @@ import { StatusBadge } from './status-badge';
 import { TargetSampling } from './target-panel';
 import { TargetSwatches } from './target-swatches';
 
-type Production = { canDecide: boolean; sprueAllowanceMl: number };
+type Production = { canDecide: boolean; sprueAllowanceMl: number; volumeUnit?: VolumeUnit };
 
 export function MatchBench({ matchId, canPour, production }: { matchId: string; canPour: boolean; production: Production }) {
   const key = `/api/matches/${matchId}`;
@@ -98,7 +99,7 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
         </section>
       ) : null}
 
-      <MatchBatches match={match} canLog={canPour} sprueAllowanceMl={production.sprueAllowanceMl} selectedId={params.get('batch')} onSelect={selectBatch} />
+      <MatchBatches match={match} canLog={canPour} sprueAllowanceMl={production.sprueAllowanceMl} volumeUnit={production.volumeUnit} selectedId={params.get('batch')} onSelect={selectBatch} />
     </div>
   );
 }

@@ -14,17 +14,21 @@ import type { BatchView } from '@/db/queries/batches';
 import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { apiFetch, swrFetcher } from '@/lib/http/client';
-import { moldYield } from '@/lib/recipes';
+import { fromCups, moldYield, toCups, VOLUME_LABEL, zoneCupsProblem, type BatchPrefill, type VolumeUnit } from '@/lib/recipes';
 import type { UploadedPhoto } from '@/lib/uploads/limits';
 import { MAX_BAITS, MAX_BATCH_CUPS } from '@/lib/validations/production';
+import { amount } from './dose';
+import { BatchRunFields } from './batch-run-fields';
 
 type Mold = { id: string; name: string; cavities: number; mlPerCavity: number };
+type Colorant = { id: string; name: string; kind: string };
 // Number inputs give strings: empty is "not given", anything else a number (NaN fails).
 const blank = (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v));
 const count = (name: string) =>
   z.preprocess(blank, z.number().int(`${name} is a whole number`).min(0, `${name} cannot be negative`).max(MAX_BAITS).optional());
 const formSchema = z.object({
-  cups: z.preprocess(blank, z.number({ error: 'give the batch size in cups' }).gt(0, 'more than 0 cups').max(MAX_BATCH_CUPS, `at most ${MAX_BATCH_CUPS} cups`)),
+  // In the shop's batch size unit; the cups ceiling is checked after conversion.
+  size: z.preprocess(blank, z.number({ error: 'give the batch size' }).gt(0, 'more than 0')),
   moldId: z.string().optional(),
   baitsExpected: count('the expected count'),
   baits: count('the bait count'),
@@ -32,7 +36,16 @@ const formSchema = z.object({
 });
 type Values = z.input<typeof formSchema>;
 
-type Props = { matchId: string; standardPourId: string; sprueAllowanceMl: number; onLogged: (batch: BatchView) => void };
+type Props = {
+  matchId: string;
+  standardPourId: string;
+  sprueAllowanceMl: number;
+  /** The shop's batch size unit (team setting). */
+  volumeUnit?: VolumeUnit;
+  /** From a run plan ("Log as batch"). */
+  prefill?: BatchPrefill | null;
+  onLogged: (batch: BatchView) => void;
+};
 
 // Logs one production batch of the standard: size, mold and bait counts, a QC
 // photo with every zone of the standard marked (starting from the standard
@@ -40,32 +53,45 @@ type Props = { matchId: string; standardPourId: string; sprueAllowanceMl: number
 export function BatchForm(props: Props) {
   const { data: std, error } = useSWR<PourView>(`/api/pours/${props.standardPourId}`, swrFetcher);
   const { data: molds, error: moldError } = useSWR<Mold[]>('/api/molds', swrFetcher);
+  const { data: colorants } = useSWR<Colorant[]>('/api/colorants', swrFetcher);
   const failed = error ?? moldError;
   if (failed) return <p role="alert" className="text-band-off">Could not load the standard or the molds: {(failed as Error).message}</p>;
   // The form starts from the standard's mold, so its options must be there first.
-  if (!std || !molds) return <p role="status" className="text-ink-soft">Loading the standard…</p>;
-  return <BatchFormFields {...props} std={std} molds={molds} />;
+  if (!std || !molds || !colorants) return <p role="status" className="text-ink-soft">Loading the standard…</p>;
+  return <BatchFormFields {...props} std={std} molds={molds} bases={colorants.filter((c) => c.kind === 'base')} />;
 }
 
-function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds }: Props & { std: PourView; molds: Mold[] }) {
+function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefill, onLogged, std, molds, bases }: Props & { std: PourView; molds: Mold[]; bases: Colorant[] }) {
+  const unit = volumeUnit;
+  const inUnit = (cups: number) => amount(fromCups(cups, unit));
+  const [zoneSizes, setZoneSizes] = useState<Record<string, string>>(() => Object.fromEntries((prefill?.zoneCups ?? []).map((z) => [z.zone, inUnit(z.cups)])));
+  const [plan, setPlan] = useState(prefill?.plan ?? null);
+  const [baseId, setBaseId] = useState(bases[0]?.id ?? '');
   const [photo, setPhoto] = useState<UploadedPhoto | null>(null);
   const [shapes, setShapes] = useState<Record<string, Shape>>({});
   const [error, setError] = useState<string | null>(null);
   const onShapes = useCallback((s: Record<string, Shape>) => setShapes(s), []);
   const { register, handleSubmit, watch, formState } = useForm<Values>({
     resolver: zodResolver(formSchema),
-    defaultValues: { cups: '', moldId: std.moldId ?? '', baitsExpected: '', baits: '', notes: '' },
+    defaultValues: { size: prefill?.cups ? inUnit(prefill.cups) : '', moldId: prefill?.moldId ?? std.moldId ?? '', baitsExpected: '', baits: '', notes: '' },
   });
   const zones = std.zones.map((z) => z.name);
   const missing = zones.filter((z) => !shapes[z]);
-  const cups = Number(watch('cups'));
+  const cups = toCups(Number(watch('size')), unit);
   const mold = molds.find((m) => m.id === watch('moldId'));
   const yieldHint = mold && cups > 0 && cups <= MAX_BATCH_CUPS ? moldYield(cups, mold, sprueAllowanceMl) : null;
+  const planBaits = plan?.reduce((s, l) => s + l.shots * (molds.find((m) => m.id === l.moldId)?.cavities ?? 0), 0) ?? null;
+  // Each side's cups, when any is typed: all of them, adding up to the batch.
+  const typed = zones.some((z) => (zoneSizes[z] ?? '').trim() !== '');
+  const zoneCups = typed ? zones.map((z) => ({ zone: z, cups: toCups(Number(zoneSizes[z] || 0), unit) })) : null;
+  const splitError = zoneCups && cups > 0 ? zoneCupsProblem(cups, zones, zoneCups)?.replace(/^zoneCups: /, '').replace(/cups/g, VOLUME_LABEL[unit]) ?? null : null;
+  const sizeError = cups > MAX_BATCH_CUPS ? `at most ${inUnit(MAX_BATCH_CUPS)} ${VOLUME_LABEL[unit]} (${MAX_BATCH_CUPS} cups)` : undefined;
 
   const onSubmit = handleSubmit(async (raw) => {
     setError(null);
     if (!photo) return setError('Add the QC photo of this batch first.');
     if (missing.length) return setError(`Mark every zone of the standard on the photo (missing: ${missing.join(', ')}).`);
+    if (sizeError || splitError) return setError(sizeError ? `Batch size: ${sizeError}.` : `Each side’s cup: ${splitError}.`);
     const v = formSchema.parse(raw);
     try {
       const batch = await apiFetch<BatchView>(`/api/matches/${matchId}/batches`, {
@@ -74,7 +100,10 @@ function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds }: Pr
           photoId: photo.photoId,
           zones: zones.map((name) => ({ name, shape: shapes[name] })),
           neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL] } : undefined,
-          cups: v.cups,
+          cups: toCups(v.size, unit),
+          zoneCups,
+          plan,
+          baseColorantId: baseId || null,
           moldId: v.moldId || null,
           baitsExpected: v.baitsExpected ?? null,
           baits: v.baits ?? null,
@@ -91,8 +120,8 @@ function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds }: Pr
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Log a batch" className="space-y-4">
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field label="Batch size (cups)" error={e.cups?.message}>
-          <input type="number" inputMode="decimal" step="any" min="0" className={inputClass} {...register('cups')} />
+        <Field label={`Batch size (${VOLUME_LABEL[unit]})`} error={e.size?.message ?? sizeError} hint={unit !== 'cups' && cups > 0 ? `${amount(cups)} cups` : undefined}>
+          <input type="number" inputMode="decimal" step="any" min="0" className={inputClass} {...register('size')} />
         </Field>
         <Field label="Mold" hint={std.mold ? `The standard was poured in ${std.mold}.` : undefined}>
           <select className={inputClass} {...register('moldId')}>
@@ -103,7 +132,9 @@ function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds }: Pr
         <Field
           label="Expected bait count (optional)"
           error={e.baitsExpected?.message}
-          hint={yieldHint
+          hint={planBaits
+            ? `Leave empty to use the run plan’s ${planBaits} baits.`
+            : yieldHint
             ? `Leave empty to use the mold’s yield: ${yieldHint.baits} baits (${yieldHint.shots} shots of ${yieldHint.mlPerShot.toFixed(1)} mL).`
             : 'Leave empty to work it out from the mold and the batch size.'}
         >
@@ -113,6 +144,11 @@ function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds }: Pr
           <input type="number" inputMode="numeric" step="1" min="0" className={inputClass} {...register('baits')} />
         </Field>
       </div>
+      <BatchRunFields
+        zones={zones} unit={unit} totalCups={cups > 0 ? cups : null} zoneSizes={zoneSizes}
+        onZoneSize={(z, val) => setZoneSizes({ ...zoneSizes, [z]: val })} splitError={splitError}
+        plan={plan} molds={molds} onDropPlan={() => setPlan(null)} bases={bases} baseId={baseId} onBase={setBaseId}
+      />
       <Field label="Notes (optional)">
         <textarea rows={2} className={`${inputClass} py-2`} {...register('notes')} />
       </Field>

@@ -10,6 +10,7 @@ import { RegionsOnPhoto } from '@/components/match/regions-on-photo';
 import type { BatchView } from '@/db/queries/batches';
 import type { Shape } from '@/lib/color/types';
 import { PassBadge } from './pass-badge';
+import { price } from './sheet-production';
 import { when } from './when';
 
 const lab = (l: { l: number; a: number; b: number }) => `L* ${l.l.toFixed(1)} a* ${l.a.toFixed(1)} b* ${l.b.toFixed(1)}`;
@@ -38,6 +39,7 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
           batch.baits !== null ? `${batch.baits} baits` : null, batch.baitsExpected !== null ? `${batch.baitsExpected} expected` : null, batch.notes]
           .filter(Boolean).join(' · ')}
       </p>
+      <BatchNumbers batch={batch} />
       <div className="flex flex-wrap items-center justify-between gap-2">
         <Link href={`/batches/${batch.id}/sheet`} className="inline-flex min-h-tap items-center rounded-md border border-panel-line bg-white px-4 font-medium">
           Batch sheet
@@ -67,5 +69,22 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
         </div>
       ) : null}
     </section>
+  );
+}
+
+// Cost per bait, each side's cups and what the batch took from stock (issue #13).
+function BatchNumbers({ batch }: { batch: BatchView }) {
+  const c = batch.cost;
+  const atLeast = c.complete ? '' : 'at least ';
+  return (
+    <div className="space-y-1 text-sm">
+      <p className="num">
+        {batch.zoneCups.length > 1 ? `${batch.zoneCups.map((z) => `${z.zone} ${Number(z.cups.toFixed(2))} cups`).join(' + ')} · ` : ''}
+        Cost {atLeast}{price(c.total, c.currency)}{c.perBait !== null ? `, ${atLeast}${price(c.perBait, c.currency)} per bait` : ''}
+        {c.molds.length ? ` · ${c.molds.map((m) => `${price(m.perBait, c.currency)} a bait in ${m.name}`).join(' · ')}` : ''}
+      </p>
+      {c.missing.length ? <p>No cost in the library for {c.missing.join(', ')}: left out of the figures.</p> : null}
+      {batch.belowZero.length ? <p role="status" className="font-medium"><span aria-hidden>▲ </span>Logged, but stock went below zero for {batch.belowZero.join(', ')}: count the shelf and record a delivery.</p> : null}
+    </div>
   );
 }

@@ -1,6 +1,7 @@
 import Link from 'next/link';
 import { SAFETY_CAUTIONS, TEMPERATURE_CAUTION } from '@/lib/batches/safetyCautions';
-import { amount } from './dose';
+import { amount, volume } from './dose';
+import { SheetCost, SheetPlan, SheetStock } from './sheet-production';
 import { PassBadge } from './pass-badge';
 import { SheetQc } from './sheet-qc';
 import { PrintButton } from './print-button';
@@ -39,10 +40,11 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
           </div>
         </div>
         <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-4">
-          <Item label="Batch size"><span className="num">{amount(sheet.cups)} cups ({sheet.batchMl.toFixed(0)} mL)</span></Item>
+          <Item label="Batch size"><span className="num">{volume(sheet.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${sheet.batchMl.toFixed(0)} mL)`}</span></Item>
           <Item label="Standard">pour #{sheet.standard.number}</Item>
           <Item label="Mold">{mold ? mold.name : 'not given'}</Item>
           <Item label="Expected yield"><span className="num">{sheet.batch.baitsExpected ?? mold?.baits ?? '—'} baits</span></Item>
+          <Item label="Cost per bait"><span className="num">{sheet.cost.perBait === null ? '—' : `${sheet.cost.complete ? '' : '≥ '}${sheet.cost.currency} ${sheet.cost.perBait.toFixed(3)}`}</span></Item>
           <Item label="Logged"><span className="num">{day(sheet.batch.createdAt)}</span></Item>
           <Item label="QC against the standard"><PassBadge pass={sheet.batch.pass} /></Item>
           <Item label="Tolerance"><span className="num">{sheet.match.tolerance.toFixed(1)} ΔE00</span></Item>
@@ -82,6 +84,7 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
               <div className="swatch h-14 rounded-sm border border-stage-rule" style={{ background: l.hex ?? '#777777', ['--swatch' as string]: l.hex ?? '#777777' }} />
               <p className="mt-1 text-sm font-semibold capitalize text-white">{l.zone}</p>
               <p className="text-xs text-white">{layerLabel(l.position, sheet.layout.length)}</p>
+              <p className="num text-sm font-semibold text-white">{volume(l.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${l.ml.toFixed(0)} mL)`}</p>
               {l.lab ? <p className="num text-xs text-white">L* {l.lab.l.toFixed(1)} a* {l.lab.a.toFixed(1)} b* {l.lab.b.toFixed(1)}</p> : null}
             </li>
           ))}
@@ -89,9 +92,23 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
         <p className="mt-1 text-xs">Swatches as measured on the standard pour (CIELAB, D65 white). Screen and paper colours are a guide only: judge the bait against the standard bait.</p>
       </section>
 
+      {sheet.plan ? (
+        <section aria-labelledby="sheet-plan" className={`${box} sheet-keep`}>
+          <h2 id="sheet-plan" className="text-lg font-semibold">Run plan</h2>
+          <SheetPlan sheet={sheet} />
+        </section>
+      ) : null}
+
       <section aria-labelledby="sheet-molds" className={`${box} sheet-keep`}>
         <h2 id="sheet-molds" className="text-lg font-semibold">Molds and expected yield</h2>
         <SheetMolds sheet={sheet} />
+      </section>
+
+      <section aria-labelledby="sheet-cost" className={`${box} sheet-keep`}>
+        <h2 id="sheet-cost" className="text-lg font-semibold">Cost and stock</h2>
+        <SheetCost sheet={sheet} />
+        <h3 className="mt-2 font-semibold">Taken from stock</h3>
+        <SheetStock sheet={sheet} />
       </section>
 
       <section aria-labelledby="sheet-notes" className={`${box} sheet-keep`}>

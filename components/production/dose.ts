@@ -1,3 +1,5 @@
+import { fromCups, VOLUME_LABEL, type VolumeUnit } from '@/lib/recipes/units';
+
 // Doses as a pourer reads them: whole drops where the number is whole, up to
 // two decimals otherwise; teaspoons also as the nearest eighth when it is
 // within 0.01 tsp of one (measuring spoons come in eighths and quarters).
@@ -23,4 +25,11 @@ export function dose(v: number, unit: string): string {
   const frac = unit === 'tsp' ? spoonFraction(v) : null;
   const main = `${amount(v)} ${unitLabel(unit)}`;
   return frac ? `${main} (${frac})` : main;
+}
+
+// A batch volume in the shop's batch size unit (team setting), from cups.
+export function volume(cups: number, unit: VolumeUnit = 'cups'): string {
+  const v = fromCups(cups, unit);
+  const shown = unit === 'ml' ? v.toFixed(0) : amount(v);
+  return `${shown} ${unit === 'cups' && shown === '1' ? 'cup' : VOLUME_LABEL[unit]}`;
 }

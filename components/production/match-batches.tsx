@@ -1,32 +1,43 @@
 'use client';
 
+import { useSearchParams } from 'next/navigation';
 import { useEffect, useRef, useState } from 'react';
 import useSWR from 'swr';
 import { Button } from '@/components/ui/button';
 import type { BatchView } from '@/db/queries/batches';
 import type { MatchDetail } from '@/db/queries/matchDetail';
 import { swrFetcher } from '@/lib/http/client';
+import { decodeBatchPrefill, type VolumeUnit } from '@/lib/recipes';
 import { BatchForm } from './batch-form';
 import { BatchResult } from './batch-result';
 import { PassBadge } from './pass-badge';
 import { RunChart } from './run-chart';
 import { when } from './when';
+import { volume } from './dose';
 
 type Props = {
   match: MatchDetail;
   canLog: boolean;
   sprueAllowanceMl: number;
+  volumeUnit?: VolumeUnit;
   selectedId: string | null;
   onSelect: (batchId: string | null) => void;
 };
 
 // Production of a match's standard: log a batch, see it pass or fail, the
 // run chart of each standard the match has had, and every batch logged.
-export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSelect }: Props) {
+export function MatchBatches({ match, canLog, sprueAllowanceMl, volumeUnit, selectedId, onSelect }: Props) {
+  const searchParams = useSearchParams();
   const key = `/api/matches/${match.id}/batches`;
   const { data: batches, error, mutate } = useSWR<BatchView[]>(key, swrFetcher);
-  const [logging, setLogging] = useState(false);
+  // Arriving from a run plan's "Log as batch": the form opens pre-filled.
+  const [prefill] = useState(() => decodeBatchPrefill(searchParams));
+  const [logging, setLogging] = useState(prefill !== null && canLog);
   const section = useRef<HTMLElement>(null);
+  const form = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    if (prefill) form.current?.scrollIntoView({ block: 'start' });
+  }, [prefill]);
   const scrolled = useRef(false);
   const selected = batches?.find((b) => b.id === selectedId) ?? null;
 
@@ -51,7 +62,7 @@ export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSe
         Each batch is checked against the standard (pour #{match.pours.find((p) => p.id === match.standardPourId)?.number}) within {match.tolerance.toFixed(1)} ΔE00 in every zone.
       </p>
       {logging ? (
-        <div className="rounded-lg border border-panel-line bg-white p-4">
+        <div ref={form} className="scroll-mt-4 rounded-lg border border-panel-line bg-white p-4">
           <div className="mb-3 flex items-center justify-between gap-2">
             <h3 className="text-lg font-semibold">Log a batch</h3>
             <Button variant="secondary" onClick={() => setLogging(false)}>Cancel</Button>
@@ -60,6 +71,8 @@ export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSe
             matchId={match.id}
             standardPourId={match.standardPourId}
             sprueAllowanceMl={sprueAllowanceMl}
+            volumeUnit={volumeUnit}
+            prefill={prefill}
             onLogged={(b) => {
               setLogging(false);
               void mutate((list) => [...(list ?? []), b], { revalidate: true });
@@ -92,7 +105,7 @@ export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSe
                 >
                   <PassBadge pass={b.pass} />
                   <span className="num">{when(b.createdAt)}</span>
-                  <span className="num">{b.cups} cups{b.mold ? ` · ${b.mold}` : ''}</span>
+                  <span className="num">{volume(b.cups, volumeUnit)}{b.mold ? ` · ${b.mold}` : ''}</span>
                   <span className="num">{b.zones.map((z) => `${z.name} ${z.dE00.toFixed(1)} ΔE00`).join(' · ')}</span>
                 </button>
               </li>

@@ -1,5 +1,5 @@
 import type { loadBatchSheet } from '@/lib/batches/loadBatchSheet';
-import { amount, dose, unitLabel } from './dose';
+import { amount, dose, unitLabel, volume } from './dose';
 
 export type Sheet = ReturnType<typeof loadBatchSheet>;
 const th = 'border-b border-panel-line p-2 text-left font-semibold';
@@ -8,7 +8,7 @@ const td = 'border-b border-panel-line p-2 align-top';
 const wide = 'hidden sm:table-cell print:table-cell';
 const paper = 'hidden print:table-cell';
 
-// The standard's recipe scaled to this batch, one table per layer, in the
+// The standard's recipe scaled to each layer's own cups, one table per layer, in the
 // units the pourer doses; approximate millilitres where the unit allows
 // (drops through the team's dropper setting, teaspoons by 1/48 cup).
 export function SheetRecipe({ sheet }: { sheet: Sheet }) {
@@ -16,7 +16,7 @@ export function SheetRecipe({ sheet }: { sheet: Sheet }) {
     <div className="space-y-3">
       {sheet.layout.map((layer) => (
         <div key={layer.zone} className="sheet-keep overflow-x-auto">
-          <h3 className="font-semibold"><span className="capitalize">{layer.zone}</span> <span className="num font-normal">— for {amount(sheet.cups)} cups ({sheet.batchMl.toFixed(0)} mL) of plastisol</span></h3>
+          <h3 className="font-semibold"><span className="capitalize">{layer.zone}</span> <span className="num font-normal">— {sheet.laminate ? 'its own cup: ' : 'for '}{volume(layer.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${layer.ml.toFixed(0)} mL)`} of plastisol</span></h3>
           {layer.recipe.length === 0 ? (
             <p className="text-sm">No colorants recorded for this layer: plain plastisol.</p>
           ) : (

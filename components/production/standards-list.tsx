@@ -1,9 +1,13 @@
 import Link from 'next/link';
 import { StatusBadge } from '@/components/match/status-badge';
-import type { StandardView } from '@/db/queries/standards';
+import type { StandardView as StandardRow } from '@/db/queries/standards';
+import type { BatchCost } from '@/lib/recipes';
+import { price } from './sheet-production';
 import { dose } from './dose';
 import { PassBadge } from './pass-badge';
 import { day } from './when';
+
+type StandardView = StandardRow & { cost?: BatchCost & { currency: string } };
 
 const linkClass = 'inline-flex min-h-tap items-center rounded-md border border-panel-line bg-white px-4 font-medium';
 
@@ -48,6 +52,12 @@ export function StandardsList({ standards }: { standards: StandardView[] }) {
                   'none yet'
                 )}
               </Figure>
+              {s.cost ? (
+                <Figure label="Cost">
+                  <span className="num">{s.cost.complete ? '' : '≥ '}{price(s.cost.total, s.cost.currency)} a cup{s.cost.molds[0] ? ` · ${s.cost.complete ? '' : '≥ '}${price(s.cost.molds[0].perBait, s.cost.currency)} a bait in ${s.cost.molds[0].name}` : ''}</span>
+                  {s.cost.missing.length ? <span className="block text-xs font-normal">no cost for {s.cost.missing.join(', ')}</span> : null}
+                </Figure>
+              ) : null}
               <Figure label="Temperature">
                 <span className="num">{s.tempF === null ? 'not recorded' : `${s.tempF} °F (${(((s.tempF - 32) * 5) / 9).toFixed(0)} °C)`}</span>
               </Figure>
@@ -75,6 +85,7 @@ export function StandardsList({ standards }: { standards: StandardView[] }) {
             </div>
             <div className="flex flex-wrap gap-2">
               <Link href={`/matches/${s.matchId}?pour=${s.standardPourId}`} className={linkClass}>Open the match</Link>
+              <Link href={`/plan?standard=${s.matchId}`} className={linkClass}>Plan a run</Link>
               {s.lastBatch ? <Link href={`/batches/${s.lastBatch.id}/sheet`} className={linkClass}>Last batch sheet</Link> : null}
             </div>
           </article>

@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { VOLUME_LABEL, VOLUME_UNITS } from '@/lib/recipes/units';
 
-type Settings = { defaultTolerance: number; volumeUnit: string; dropsPerMl: number; sprueAllowanceMl: number };
+type Settings = { defaultTolerance: number; volumeUnit: string; dropsPerMl: number; sprueAllowanceMl: number; currency: string; stockDrawsPours: boolean };
 
 export function SettingsForm({ settings, action }: { settings: Settings; action: (p: SettingsState, f: FormData) => Promise<SettingsState> }) {
   const [state, formAction, pending] = useActionState(action, null);
@@ -27,6 +27,13 @@ export function SettingsForm({ settings, action }: { settings: Settings; action:
       <Field label="Sprue allowance per shot (mL)" error={err.sprueAllowanceMl} hint="Plastisol lost to the sprue and runners each time the mold is filled.">
         <input name="sprueAllowanceMl" type="number" step="0.5" defaultValue={settings.sprueAllowanceMl} className={inputClass} />
       </Field>
+      <Field label="Currency" error={err.currency} hint="Three-letter code (USD, EUR, CAD…); colorant and plastisol costs are in it.">
+        <input name="currency" type="text" maxLength={3} autoCapitalize="characters" defaultValue={settings.currency} className={inputClass} />
+      </Field>
+      <label className="flex min-h-tap items-center gap-3 text-sm sm:col-span-2">
+        <input name="stockDrawsPours" type="checkbox" defaultChecked={settings.stockDrawsPours} className="h-5 w-5" />
+        Test pours with a batch size draw their doses and plastisol from stock too (batches always do).
+      </label>
       <div className="flex items-center gap-3 sm:col-span-2">
         <Button type="submit" disabled={pending}>Save settings</Button>
         {state?.message ? <span role="status" className="text-sm text-ink-soft">{state.message}</span> : null}

@@ -1,8 +1,11 @@
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import { describeDifference, labToHex } from '../../lib/color';
+import { costOfBatch, defaultBase, getBase } from '../../lib/batches/batchMaterials';
+import { splitZoneCups } from '../../lib/recipes';
 import { sampleFigures } from './pours';
+import { batchMovements } from './stock';
 import type { DB } from '../open';
-import { batches, matches, molds, pours, samples, users, zones } from '../schema';
+import { batches, matches, molds, pours, samples, teams, users, zones } from '../schema';
 
 // Production batches in the API's Batch shape: ΔE00 per zone against the
 // standard pour's measured colour, and pass/fail against the match's
@@ -29,8 +32,29 @@ function batchViews(database: DB, teamId: string, where: { batchId?: string; mat
   const stdSamples = database.select().from(samples).where(and(eq(samples.purpose, 'pour'), inArray(samples.pourId, stdIds))).all();
   const zoneOrder = database.select({ matchId: zones.matchId, name: zones.name, position: zones.position }).from(zones)
     .where(inArray(zones.matchId, matchIds)).orderBy(asc(zones.position)).all();
+  const team = database.select().from(teams).where(eq(teams.id, teamId)).get()!;
+  const moves = batchMovements(database, teamId, batchIds);
+  const moldIds = [...new Set(rows.flatMap((r) => [r.b.moldId, ...(r.b.plan ?? []).map((p) => p.moldId)]).filter((x): x is string => !!x))];
+  const moldRows = moldIds.length ? database.select().from(molds).where(and(eq(molds.teamId, teamId), inArray(molds.id, moldIds))).all() : [];
+  const fallbackBase = defaultBase(database, teamId);
   return rows.map(({ b, by, mold, matchName, tolerance, stdNumber }) => {
     const order = zoneOrder.filter((z) => z.matchId === b.matchId).map((z) => z.name);
+    const stdZoneNames = order.filter((z) => stdSamples.some((x) => x.pourId === b.standardPourId && x.zone === z));
+    const zoneCups = b.zoneCups ?? splitZoneCups(b.cups, stdZoneNames);
+    const plan = b.plan
+      ? b.plan.map((p) => {
+        const m = moldRows.find((x) => x.id === p.moldId);
+        return { moldId: p.moldId, name: m?.name ?? 'a mold no longer in the library', cavities: m?.cavities ?? 0, mlPerCavity: m?.mlPerCavity ?? 0, shots: p.shots, baits: (m?.cavities ?? 0) * p.shots };
+      })
+      : null;
+    const costMolds = [...(plan ?? []).map((p) => moldRows.find((m) => m.id === p.moldId)), moldRows.find((m) => m.id === b.moldId)]
+      .filter((m, i, all): m is NonNullable<typeof m> => !!m && all.findIndex((x) => x?.id === m.id) === i);
+    const base = b.baseColorantId ? getBase(database, teamId, b.baseColorantId) : fallbackBase;
+    const cost = costOfBatch(database, teamId, {
+      standardPourId: b.standardPourId, zoneCups, base, dropsPerMl: team.dropsPerMl, sprueAllowanceMl: team.sprueAllowanceMl,
+      molds: costMolds, baits: b.baitsActual ?? b.baitsExpected,
+    });
+    const stock = moves.filter((m) => m.batchId === b.id).map(({ batchId: _b, ...m }) => m);
     const zs = batchSamples
       .filter((s) => s.batchId === b.id)
       .sort((x, y) => order.indexOf(x.zone) - order.indexOf(y.zone))
@@ -66,6 +90,13 @@ function batchViews(database: DB, teamId: string, where: { batchId?: string; mat
       notes: b.notes,
       createdBy: by,
       createdAt: b.createdAt,
+      zoneCups,
+      plan,
+      baseColorantId: base?.id ?? null,
+      // What the batch took from stock, and the shelf it left (issue #13).
+      stock,
+      belowZero: stock.filter((m) => m.balance < 0).map((m) => m.name),
+      cost: { currency: team.currency, ...cost },
     };
   });
 }

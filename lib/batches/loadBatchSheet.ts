@@ -1,4 +1,4 @@
-import { and, asc, eq, isNull, or } from 'drizzle-orm';
+import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { BatchView } from '@/db/queries/batches';
 import { getRecipe } from '@/db/queries/pours';
@@ -6,6 +6,7 @@ import { molds, pours, teams, zones as zoneTable } from '@/db/schema';
 import { standardZones } from './logBatch';
 import { buildBatchSheet } from './buildBatchSheet';
 import { thicknessRedose } from '@/lib/matches/thicknessRedose';
+import { zoneCupsProblem } from '@/lib/recipes';
 
 // The data of a batch's printable sheet: the batch, the standard it was
 // poured to, and the sheet arithmetic with the team's dropper and sprue
@@ -34,6 +35,15 @@ export function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
       const s = samples.find((x) => x.zone === z.name);
       return { name: z.name, lab: s ? { l: s.l, a: s.a, b: s.b } : null, hex: s?.hex ?? null };
     });
+  const planIds = (batch.plan ?? []).map((p) => p.moldId);
+  const planRows = planIds.length
+    ? database.select({ id: molds.id, name: molds.name, cavities: molds.cavities, mlPerCavity: molds.mlPerCavity, thickness: molds.thickness })
+      .from(molds).where(and(eq(molds.teamId, teamId), inArray(molds.id, planIds))).all()
+    : [];
+  const plan = (batch.plan ?? []).flatMap((p) => {
+    const m = planRows.find((r) => r.id === p.moldId);
+    return m && m.cavities >= 1 && m.mlPerCavity > 0 ? [{ ...m, shots: p.shots }] : [];
+  });
   const sheet = buildBatchSheet({
     cups: batch.cups,
     dropsPerMl: team.dropsPerMl,
@@ -43,6 +53,9 @@ export function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
     molds: moldRows,
     selectedMoldId,
     tempF: std.tempF,
+    zoneCups: zoneCupsProblem(batch.cups, zones.map((z) => z.name), batch.zoneCups) ? null : batch.zoneCups,
+    plan: plan.length ? plan : null,
+    volumeUnit: team.volumeUnit,
   });
   // A standard poured in a mold of another thickness class: its recipe re-dosed, as a prediction.
   const thicknessOf = (id: string | null) => (id ? database.select({ t: molds.thickness }).from(molds).where(and(eq(molds.id, id), eq(molds.teamId, teamId))).get()?.t ?? null : null);
@@ -52,6 +65,9 @@ export function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
   return {
     thicknessRedose: redose,
     batch: { id: batch.id, createdAt: batch.createdAt, createdBy: batch.createdBy, pass: batch.pass, baits: batch.baits, baitsExpected: batch.baitsExpected, notes: batch.notes },
+    cost: batch.cost,
+    stock: batch.stock,
+    belowZero: batch.belowZero,
     match: { id: batch.matchId, name: batch.matchName, tolerance: batch.tolerance },
     // Per zone: ΔE00 (with its ±) against the standard and, when marked, against the reference in frame.
     qc: batch.zones.map((z) => ({ name: z.name, dE00: z.dE00, uncertainty: z.uncertainty, band: z.band, inFrame: z.inFrame as { dE00: number; band: string; uncertainty?: number } | null })),

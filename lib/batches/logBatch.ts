@@ -10,7 +10,9 @@ import { queueMail } from '@/lib/mail/queue';
 import { batchFailedMail } from '@/lib/mail/templates-production';
 import { loadMatch } from '@/lib/matches/loadMatch';
 import { comparedExtras, measureZones } from '@/lib/matches/measureZones';
-import { moldYield } from '@/lib/recipes';
+import { moldYield, splitZoneCups, zoneCupsProblem } from '@/lib/recipes';
+import { moveStock } from '@/lib/stock/moveStock';
+import { batchMaterials, defaultBase, getBase } from './batchMaterials';
 import { leadsAndOwners } from '@/lib/signoff/recipients';
 import type { BatchInput } from '@/lib/validations/production';
 
@@ -20,6 +22,16 @@ export const batchLink = (baseUrl: string, matchId: string, batchId: string) =>
 // The standard's measured colour per zone: the samples of the standard pour.
 export function standardZones(database: Pick<DB, 'select'>, standardPourId: string) {
   return database.select().from(samples).where(and(eq(samples.pourId, standardPourId), eq(samples.purpose, 'pour'))).all();
+}
+
+// The molds of a run plan, each from the team's live library.
+function planMolds(database: DB, teamId: string, plan: { moldId: string; shots: number }[] | null) {
+  if (!plan) return null;
+  return plan.map((p, i) => {
+    const m = database.select().from(molds).where(and(eq(molds.id, p.moldId), eq(molds.teamId, teamId), isNull(molds.archivedAt))).get();
+    if (!m) throw new ApiError(400, 'invalid_body', `plan[${i}].moldId: no such mold in your library`);
+    return { ...m, shots: p.shots };
+  });
 }
 
 // Logs one production batch of a match's standard: measures the QC photo's
@@ -48,9 +60,19 @@ export async function logBatch(database: DB, member: Member, matchId: string, in
     ? database.select().from(molds).where(and(eq(molds.id, input.moldId), eq(molds.teamId, teamId), isNull(molds.archivedAt))).get()
     : undefined;
   if (input.moldId && !mold) throw new ApiError(400, 'invalid_body', 'moldId: no such mold in your library');
-  const team = database.select({ sprue: teams.sprueAllowanceMl }).from(teams).where(eq(teams.id, teamId)).get();
+  const team = database.select({ sprue: teams.sprueAllowanceMl, dropsPerMl: teams.dropsPerMl }).from(teams).where(eq(teams.id, teamId)).get()!;
   const usable = mold && mold.cavities >= 1 && mold.mlPerCavity > 0;
-  const baitsExpected = input.baitsExpected ?? (usable ? moldYield(input.cups, mold, team?.sprue ?? 0).baits : null);
+  const planned = planMolds(database, teamId, input.plan ?? null);
+  const baitsExpected = input.baitsExpected
+    ?? (planned ? planned.reduce((s, p) => s + p.cavities * p.shots, 0) : usable ? moldYield(input.cups, mold, team.sprue).baits : null);
+  // Each zone's own cups (a laminate mixes each colour in its own cup).
+  const zoneNames = [...stdNames].sort((a, b) => zoneRows.findIndex((z) => z.name === a) - zoneRows.findIndex((z) => z.name === b));
+  const splitProblem = input.zoneCups?.length ? zoneCupsProblem(input.cups, zoneNames, input.zoneCups) : null;
+  if (splitProblem) throw new ApiError(400, 'invalid_body', splitProblem);
+  const zoneCups = splitZoneCups(input.cups, zoneNames, input.zoneCups);
+  const base = input.baseColorantId ? getBase(database, teamId, input.baseColorantId) : defaultBase(database, teamId);
+  if (input.baseColorantId && !base) throw new ApiError(400, 'invalid_body', 'baseColorantId: no such colorant in your library');
+  const { draws } = batchMaterials(database, teamId, { standardPourId, zoneCups, base, dropsPerMl: team.dropsPerMl });
 
   const measured = await measureZones(database, teamId, input.photoId, input.zones, input.neutral);
   const figures = measured.regions.map((r, i) => {
@@ -70,8 +92,14 @@ export async function logBatch(database: DB, member: Member, matchId: string, in
       .values({
         id, teamId, matchId, standardPourId, photoId: input.photoId, moldId: input.moldId ?? null, cups: input.cups,
         baitsExpected, baitsActual: input.baits ?? null, pass, notes: input.notes ?? null, createdBy: member.user.id,
+        zoneCups, plan: input.plan ?? null, baseColorantId: base?.id ?? null,
       })
       .run();
+    // The batch draws its doses and plastisol from stock in the same
+    // transaction: a batch that is not stored moves nothing.
+    for (const d of draws) {
+      if (d.amount > 0) moveStock(tx, { teamId, colorantId: d.colorantId, kind: 'batch', amount: -d.amount, batchId: id, createdBy: member.user.id });
+    }
     for (const { region: r, shape, cmp, extras } of figures) {
       tx.insert(samples)
         .values({

@@ -7,6 +7,7 @@ import { recordAudit } from '@/lib/audit';
 import { newId } from '@/lib/auth/tokens';
 import { badRequest, notFound } from '@/lib/http/api';
 import { type ColorantInput, type ColorantPatch, FLAKE_SIZE_REQUIRED } from '@/lib/validations/library';
+import { moveStock } from '@/lib/stock/moveStock';
 import { assertNameFree, isUniqueViolation, nameTakenError } from './nameTaken';
 
 type Columns = Omit<Colorant, 'id' | 'teamId' | 'archivedAt' | 'createdAt'>;
@@ -16,7 +17,7 @@ const blankToNull = (s: string | null | undefined) => (s ? s : null);
 // The stored columns of a complete colorant. A flake size or colour means
 // nothing on a pigment or a base, so they are kept only for a flake: turning
 // a flake into a pearl drops them rather than leaving a stale size behind.
-function toColumns(c: ColorantInput): Columns {
+export function colorantColumns(c: ColorantInput): Columns {
   const flake = c.kind === 'flake';
   return {
     name: c.name,
@@ -24,6 +25,7 @@ function toColumns(c: ColorantInput): Columns {
     unit: c.unit,
     costPerUnit: c.costPerUnit ?? null,
     stock: c.stock ?? null,
+    lowStockAt: c.lowStockAt ?? null,
     flakeSizeIn: flake ? (c.flakeSizeIn ?? null) : null,
     flakeColor: flake ? blankToNull(c.flakeColor) : null,
     swatchL: c.swatch?.l ?? null,
@@ -46,7 +48,11 @@ export function createColorant(database: DB, member: Member, input: ColorantInpu
   try {
     return database.transaction((tx) => {
       assertNameFree('colorant', input.name, findColorantByName(tx, teamId, input.name));
-      tx.insert(colorants).values({ id, teamId, ...toColumns(input) }).run();
+      tx.insert(colorants).values({ id, teamId, ...colorantColumns(input), stock: null }).run();
+      // Stock enters through the ledger: the opening count is its first movement.
+      if (input.stock !== null && input.stock !== undefined) {
+        moveStock(tx, { teamId, colorantId: id, kind: 'adjustment', amount: input.stock, note: 'opening stock', createdBy: member.user.id });
+      }
       recordAudit(tx, { teamId, actorId: member.user.id, action: 'colorant.created', entity: 'colorant', entityId: id, data: { name: input.name, kind: input.kind } });
       return colorantView(getLiveColorant(tx, teamId, id)!);
     });
@@ -67,7 +73,14 @@ export function updateColorant(database: DB, member: Member, id: string, patch: 
       const merged: ColorantInput = { ...current, ...changes };
       assertFlakeSized(merged);
       if (changes.name !== undefined) assertNameFree('colorant', changes.name, findColorantByName(tx, teamId, changes.name, id));
-      tx.update(colorants).set(toColumns(merged)).where(eq(colorants.id, id)).run();
+      const { stock: _stock, ...columns } = colorantColumns(merged);
+      tx.update(colorants).set(columns).where(eq(colorants.id, id)).run();
+      // A stock typed into the form is a count of the shelf: the difference
+      // goes into the ledger as an adjustment; blank stops keeping stock.
+      if (changes.stock === null) tx.update(colorants).set({ stock: null }).where(eq(colorants.id, id)).run();
+      else if (changes.stock !== undefined && changes.stock !== current.stock) {
+        moveStock(tx, { teamId, colorantId: id, kind: 'adjustment', amount: changes.stock - (current.stock ?? 0), note: 'counted and set in the library', createdBy: member.user.id });
+      }
       recordAudit(tx, { teamId, actorId: member.user.id, action: 'colorant.updated', entity: 'colorant', entityId: id, data: { fields: Object.keys(changes) } });
       return colorantView(getLiveColorant(tx, teamId, id)!);
     });

@@ -11,7 +11,7 @@ import { assertNameFree, isUniqueViolation, nameTakenError } from './nameTaken';
 
 const NOT_IN_LIBRARY = 'No such mold in your library';
 
-const toColumns = (m: MoldInput) => ({
+export const moldColumns = (m: MoldInput) => ({
   name: m.name,
   bodyStyle: m.bodyStyle,
   lengthIn: m.lengthIn ?? null,
@@ -26,7 +26,7 @@ export function createMold(database: DB, member: Member, input: MoldInput) {
   try {
     return database.transaction((tx) => {
       assertNameFree('mold', input.name, findMoldByName(tx, teamId, input.name));
-      tx.insert(molds).values({ id, teamId, ...toColumns(input) }).run();
+      tx.insert(molds).values({ id, teamId, ...moldColumns(input) }).run();
       recordAudit(tx, { teamId, actorId: member.user.id, action: 'mold.created', entity: 'mold', entityId: id, data: { name: input.name } });
       return moldView(getLiveMold(tx, teamId, id)!);
     });
@@ -44,7 +44,7 @@ export function updateMold(database: DB, member: Member, id: string, patch: Mold
       if (!row) throw notFound(NOT_IN_LIBRARY);
       const changes = Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)) as MoldPatch;
       if (changes.name !== undefined) assertNameFree('mold', changes.name, findMoldByName(tx, teamId, changes.name, id));
-      tx.update(molds).set(toColumns({ ...moldView(row), ...changes })).where(eq(molds.id, id)).run();
+      tx.update(molds).set(moldColumns({ ...moldView(row), ...changes })).where(eq(molds.id, id)).run();
       recordAudit(tx, { teamId, actorId: member.user.id, action: 'mold.updated', entity: 'mold', entityId: id, data: { fields: Object.keys(changes) } });
       return moldView(getLiveMold(tx, teamId, id)!);
     });

@@ -1,13 +1,16 @@
 import { and, eq, inArray, isNull, max } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { Member } from '@/db/queries/members';
-import { colorants, matches, molds, pours, recipeLines, samples } from '@/db/schema';
+import { colorants, matches, molds, pours, recipeLines, samples, teams } from '@/db/schema';
 import { targetUncertainties } from '@/db/queries/pours';
 import { compareLab } from '@/lib/color';
 import { recordAudit } from '@/lib/audit';
 import { newId } from '@/lib/auth/tokens';
 import { ApiError } from '@/lib/http/api';
 import type { PourInput } from '@/lib/validations/match';
+import { defaultBase } from '@/lib/batches/batchMaterials';
+import { batchDraws, splitZoneCups } from '@/lib/recipes';
+import { moveStock } from '@/lib/stock/moveStock';
 import { assertZonesOfMatch, loadMatch } from './loadMatch';
 import { comparedExtras, measureZones } from './measureZones';
 
@@ -44,6 +47,7 @@ export async function addPour(database: DB, member: Member, matchId: string, inp
   const measured = await measureZones(database, teamId, input.photoId, input.zones, input.neutral);
   const targetU = targetUncertainties(database, teamId, matchId);
   const id = newId();
+  const draws = pourDraws(database, teamId, input, zoneRows.map((z) => z.name));
   database.transaction((tx) => {
     const last = tx.select({ n: max(pours.number) }).from(pours).where(eq(pours.matchId, matchId)).get();
     const number = (last?.n ?? 0) + 1;
@@ -67,8 +71,24 @@ export async function addPour(database: DB, member: Member, matchId: string, inp
         })
         .run();
     });
+    for (const d of draws) {
+      if (d.amount > 0) moveStock(tx, { teamId, colorantId: d.colorantId, kind: 'pour', amount: -d.amount, pourId: id, createdBy: member.user.id });
+    }
     tx.update(matches).set({ updatedAt: Date.now() }).where(eq(matches.id, matchId)).run();
     recordAudit(tx, { teamId, actorId: member.user.id, action: 'pour.created', entity: 'pour', entityId: id, data: { matchId, number } });
   });
   return id;
+}
+
+// When the shop's setting says so, a test pour with a batch size draws its
+// doses (its cups split evenly between the match's zones) and its plastisol
+// from stock, as a batch does.
+function pourDraws(database: DB, teamId: string, input: PourInput, zones: string[]) {
+  const team = database.select({ on: teams.stockDrawsPours, dropsPerMl: teams.dropsPerMl }).from(teams).where(eq(teams.id, teamId)).get();
+  if (!team?.on || !input.batchCups || !(input.batchCups > 0)) return [];
+  const ids = [...new Set(input.recipe.map((l) => l.colorantId))];
+  const rows = ids.length
+    ? database.select({ id: colorants.id, name: colorants.name, unit: colorants.unit, costPerUnit: colorants.costPerUnit }).from(colorants).where(and(eq(colorants.teamId, teamId), inArray(colorants.id, ids))).all()
+    : [];
+  return batchDraws({ zoneCups: splitZoneCups(input.batchCups, zones), recipe: input.recipe, colorants: rows, base: defaultBase(database, teamId), dropsPerMl: team.dropsPerMl }).draws;
 }

@@ -37,6 +37,7 @@ export const colorantFields = z.object({
   unit: z.enum(DOSE_UNITS, { error: `unit must be one of ${DOSE_UNITS.join(', ')}` }),
   costPerUnit: num('cost per unit').min(0, 'cost per unit cannot be negative').max(100000, 'cost per unit must be at most 100000').nullish(),
   stock: num('stock').min(0, 'stock cannot be negative').max(1e9, 'stock must be at most 1000000000').nullish(),
+  lowStockAt: num('low-stock mark').min(0, 'low-stock mark cannot be negative').max(1e9, 'low-stock mark must be at most 1000000000').nullish(),
   flakeSizeIn: num('flake size')
     .min(FLAKE_SIZE_MIN_IN, `flake size must be at least ${FLAKE_SIZE_MIN_IN} in`)
     .max(FLAKE_SIZE_MAX_IN, `flake size must be at most ${FLAKE_SIZE_MAX_IN} in`)

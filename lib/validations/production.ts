@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idField, neutralSchema, comparedZoneSchema } from './match';
+import { comparedZoneSchema, idField, neutralSchema, zoneName } from './match';
 
 // Sign-off and production batches (issue #6). The ceilings are sanity limits
 // against typing slips, not shop limits: 400 cups is 25 gallons of plastisol.
@@ -44,6 +44,24 @@ const count = (name: string) =>
     .min(0, `${name} cannot be negative`)
     .max(MAX_BAITS, `${name} must be at most ${MAX_BAITS}`);
 
+export const MAX_SHOTS = 10_000;
+
+// A run plan as stored with a batch: which molds, how many shots of each.
+export const planSchema = z
+  .array(
+    z.object(
+      {
+        moldId: idField,
+        shots: z.number({ error: 'plan[].shots must be a number' }).int('plan[].shots must be a whole number').min(0, 'plan[].shots cannot be negative').max(MAX_SHOTS, `plan[].shots must be at most ${MAX_SHOTS}`),
+      },
+      { error: 'plan must be a list of { moldId, shots }' },
+    ),
+    { error: 'plan must be a list of { moldId, shots }' },
+  )
+  .min(1, 'a plan names at least one mold')
+  .max(20, 'a plan has at most 20 molds')
+  .refine((p) => new Set(p.map((l) => l.moldId)).size === p.length, 'each mold may appear once in a plan');
+
 export const batchSchema = z.object(
   {
     photoId: idField,
@@ -61,6 +79,18 @@ export const batchSchema = z.object(
     baits: count('baits').optional().nullable(),
     baitsExpected: count('baitsExpected').optional().nullable(),
     notes: z.string({ error: 'notes must be text' }).max(4000, 'notes must be at most 4000 characters').optional().nullable(),
+    // Issue #13: the cups of each zone's colour (default: the batch split
+    // evenly), the run plan poured, and the base the plastisol is drawn from.
+    zoneCups: z
+      .array(
+        z.object({ zone: zoneName, cups: z.number({ error: 'zoneCups[].cups must be a number' }).gt(0, 'zoneCups[].cups must be more than 0').max(MAX_BATCH_CUPS) }, { error: 'zoneCups must be a list of { zone, cups }' }),
+        { error: 'zoneCups must be a list of { zone, cups }' },
+      )
+      .max(16, 'at most 16 zones')
+      .optional()
+      .nullable(),
+    plan: planSchema.optional().nullable(),
+    baseColorantId: idField.optional().nullable(),
   },
   { error: 'the body must be a JSON object' },
 );

@@ -127,8 +127,10 @@ describe('production batches against the standard', () => {
     expect(sheet.batchMl).toBeCloseTo(3 * ML_PER_CUP, 6);
     const back = sheet.layout[0];
     expect(back.zone).toBe('back');
-    expect(back.recipe.map((l: any) => [l.unit, l.total])).toEqual([['drops', 18], ['tsp', 0.75]]);
-    expect(sheet.layout[1].recipe[0].total).toBeCloseTo(6, 9);
+    // A laminate mixes each side in its own cup: 3 cups split evenly is 1.5 cups of each.
+    expect(sheet.layout.map((l: any) => l.cups)).toEqual([1.5, 1.5]);
+    expect(back.recipe.map((l: any) => [l.unit, l.total])).toEqual([['drops', 9], ['tsp', 0.375]]);
+    expect(sheet.layout[1].recipe[0].total).toBeCloseTo(3, 9);
     const mold = sheet.molds[0];
     expect(mold).toMatchObject({ id: stickMold.id, selected: true, shots: Math.floor((3 * ML_PER_CUP) / 38) });
     expect(sheet.cautions.some((c: string) => c.includes('325–350 °F (homemadetackle.com, "Plastisol"'))).toBe(true);

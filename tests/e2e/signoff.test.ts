@@ -84,7 +84,7 @@ describe.runIf(browserAvailable())('browser: sign-off, a production batch and it
     await page.getByRole('button', { name: 'Log a batch' }).click();
     const form = page.getByRole('form', { name: 'Log a batch' });
     await form.getByLabel('Batch size (cups)').fill('2');
-    expect(await form.getByRole('combobox').inputValue()).toBe(mold.id); // starts from the standard's mold
+    expect(await form.getByRole('combobox', { name: /^Mold/ }).inputValue()).toBe(mold.id); // starts from the standard's mold
     // Yield = floor(2 cups × 236.588 mL ÷ (4 × 9.5 mL)) shots × 4 cavities (demo sprue allowance 0 mL).
     const baits = Math.floor((2 * ML_PER_CUP) / (mold.cavities * mold.mlPerCavity)) * mold.cavities;
     await form.getByText(`use the mold’s yield: ${baits} baits (`).waitFor();
@@ -108,15 +108,16 @@ describe.runIf(browserAvailable())('browser: sign-off, a production batch and it
     await page.setViewportSize({ width: 1280, height: 900 });
     await page.screenshot({ path: artifactPath('signoff-match-1280.png'), fullPage: true });
 
-    // The printable sheet: the standard scaled to 2 cups, molds with yield, temperature, cautions.
+    // The printable sheet: each side of the laminate scaled to its own cup (2 cups split evenly: 1 + 1),
+    // molds with yield, temperature, cautions.
     await result.getByRole('link', { name: 'Batch sheet' }).click();
     await page.waitForURL(/\/batches\/[^/]+\/sheet$/);
     const sheet = page.getByRole('article', { name: 'Batch sheet' });
     await sheet.getByRole('heading', { name, level: 1 }).waitFor();
     const sheetText = (await sheet.textContent())!;
-    expect(sheetText).toContain('12 drops'); // 6 drops per cup × 2 cups
-    expect(sheetText).toContain('0.5 tsp (½ tsp)'); // 0.25 tsp per cup × 2 cups
-    expect(sheetText).toContain('4 drops'); // belly: 2 drops per cup × 2 cups
+    expect(sheetText).toContain('6 drops'); // back: 6 drops per cup × 1 cup
+    expect(sheetText).toContain('0.25 tsp (¼ tsp)'); // 0.25 tsp per cup × 1 cup
+    expect(sheetText).toContain('2 drops'); // belly: 2 drops per cup × 1 cup
     expect(sheetText).toContain('340 °F');
     expect(sheetText).toContain('(171 °C)'); // (340 − 32) × 5/9 = 171.1
     expect(sheetText).toContain(`${mold.name} (this batch)`);

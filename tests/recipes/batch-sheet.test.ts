@@ -37,18 +37,38 @@ describe('batch sheet arithmetic (NIST Handbook 44, Appendix C definitions)', ()
     expect(sheet.batchMl).toBeCloseTo(3 * 236.5882365, 9);
   });
 
-  it('scales the standard per cup to 3 cups: 6 drops/cup → 18 drops, 0.25 tsp/cup → 0.75 tsp', () => {
-    const { recipe } = buildBatchSheet(base);
+  it('scales each zone to its own cup: 3 cups split evenly is 1.5 cups of back and 1.5 of belly', () => {
+    const { recipe, layout } = buildBatchSheet(base);
     const [drops, flake, belly, softener] = recipe;
-    expect(drops!.total).toBeCloseTo(18, 12);
+    expect(layout.map((l) => l.cups)).toEqual([1.5, 1.5]);
+    expect(layout[0]!.ml).toBeCloseTo(1.5 * ML_PER_CUP, 9);
+    expect(drops!.total).toBeCloseTo(9, 12); // 6 drops per cup × 1.5 cups of back
     expect(drops!.perCup).toBe(6);
-    expect(drops!.approxMl).toBeCloseTo(18 / 20, 12); // through the team's 20 drops/mL
-    expect(flake!.total).toBeCloseTo(0.75, 12);
-    expect(flake!.approxMl).toBeCloseTo(0.75 * ML_PER_TSP, 9); // 1 tsp = 1/48 cup
-    expect(belly!.total).toBeCloseTo(7.5, 12);
-    expect(softener!.total).toBeCloseTo(4.5, 12);
+    expect(drops!.approxMl).toBeCloseTo(9 / 20, 12); // through the team's 20 drops/mL
+    expect(flake!.total).toBeCloseTo(0.375, 12);
+    expect(flake!.approxMl).toBeCloseTo(0.375 * ML_PER_TSP, 9); // 1 tsp = 1/48 cup
+    expect(belly!.total).toBeCloseTo(3.75, 12);
+    expect(softener!.total).toBeCloseTo(2.25, 12);
     expect(softener!.approxMl).toBeNull(); // grams have no volume without a density
     expect(recipe.map((l) => l.colorant)).toEqual(base.recipe.map((l) => l.colorant));
+  });
+
+  it('a 6-cup laminate split 4 + 2 scales each zone’s doses to its own cups', () => {
+    const sheet = buildBatchSheet({ ...base, cups: 6, zoneCups: [{ zone: 'back', cups: 4 }, { zone: 'belly', cups: 2 }] });
+    expect(sheet.layout.map((l) => [l.zone, l.cups])).toEqual([['back', 4], ['belly', 2]]);
+    expect(sheet.layout[0]!.recipe.map((l) => l.total)).toEqual([expect.closeTo(24, 12), expect.closeTo(1, 12)]); // 6 drops, ¼ tsp × 4
+    expect(sheet.layout[1]!.recipe.map((l) => l.total)).toEqual([expect.closeTo(5, 12), expect.closeTo(3, 12)]); // 2.5 drops, 1.5 g × 2
+    expect(() => buildBatchSheet({ ...base, cups: 6, zoneCups: [{ zone: 'back', cups: 4 }, { zone: 'belly', cups: 1 }] })).toThrow(RangeError);
+  });
+
+  it('prints a run plan: Σ cavities × shots baits, Σ plastisol plus sprue, and what is left over', () => {
+    const sheet = buildBatchSheet({ ...base, plan: [{ ...base.molds[0]!, shots: 10 }, { ...base.molds[1]!, shots: 5 }] });
+    expect(sheet.plan!.baits).toBe(4 * 10 + 6 * 5);
+    expect(sheet.plan!.neededMl).toBeCloseTo(10 * (4 * 9.5 + 4) + 5 * (6 * 3.2 + 4), 9); // 420 + 116 = 536 mL
+    expect(sheet.plan!.sprueMl).toBeCloseTo(15 * 4, 12);
+    expect(sheet.plan!.leftoverMl).toBeCloseTo(3 * ML_PER_CUP - 536, 9);
+    expect(sheet.plan!.shortMl).toBe(0);
+    expect(buildBatchSheet({ ...base, cups: 2, plan: [{ ...base.molds[0]!, shots: 12 }] }).plan!.shortMl).toBeCloseTo(12 * 42 - 2 * ML_PER_CUP, 9);
   });
 
   it('gives each mold its yield: floor(3 × 236.5882365 / (9.5 × 4 + sprue)) shots', () => {
@@ -75,7 +95,7 @@ describe('batch sheet arithmetic (NIST Handbook 44, Appendix C definitions)', ()
     expect(sheet.laminate).toBe(true);
     expect(sheet.order).toBe('back over belly');
     expect(sheet.layout.map((l) => [l.zone, l.position, l.recipe.length])).toEqual([['back', 0, 2], ['belly', 1, 2]]);
-    expect(sheet.layout[0]!.recipe[0]!.total).toBeCloseTo(18, 12);
+    expect(sheet.layout[0]!.recipe[0]!.total).toBeCloseTo(9, 12);
     const single = buildBatchSheet({ ...base, zones: [base.zones[0]!], recipe: base.recipe.slice(0, 2) });
     expect(single.laminate).toBe(false);
   });

@@ -18,7 +18,7 @@ export default async function CalculatorPage() {
       </div>
       <PhotoCheck />
       <DeltaCheck tolerance={settings?.defaultTolerance ?? 2} />
-      <RecipeScaler dropsPerMl={settings?.dropsPerMl ?? 20} sprueAllowanceMl={settings?.sprueAllowanceMl ?? 0} />
+      <RecipeScaler dropsPerMl={settings?.dropsPerMl ?? 20} sprueAllowanceMl={settings?.sprueAllowanceMl ?? 0} volumeUnit={settings?.volumeUnit ?? 'cups'} />
     </div>
   );
 }

@@ -3,6 +3,7 @@ import { db } from '@/db';
 import { listRecentBatches } from '@/db/queries/batches';
 import { RecentBatches } from '@/components/production/recent-batches';
 import { requirePageMember } from '@/lib/auth/current';
+import { CsvDownload } from '@/components/library/csv-tools';
 
 export const metadata = { title: 'Batches' };
 
@@ -17,6 +18,7 @@ export default async function BatchesPage() {
           Production batches of the shop’s <Link href="/standards" className="underline underline-offset-4">standards</Link>, newest first: each is measured from its QC
           photo and passes when every zone is within the match’s tolerance (ΔE00, CIEDE2000). Bands are rules of thumb for photo work, not a standard.
         </p>
+        <div className="mt-2"><CsvDownload what="batches" label="Download batches with ΔE00 (CSV)" /></div>
       </div>
       <RecentBatches batches={batches} />
     </section>

@@ -12,12 +12,13 @@ export default async function MatchPage({ params }: { params: Promise<{ id: stri
   const { id } = await params;
   const match = getMatch(db(), member.team.id, id);
   if (!match) notFound();
+  const settings = getTeamSettings(db(), member.team.id);
   return (
     <Suspense fallback={<p role="status" className="text-ink-soft">Loading match…</p>}>
       <MatchBench
         matchId={match.id}
         canPour={roleAtLeast(member.role, 'maker')}
-        production={{ canDecide: roleAtLeast(member.role, 'lead'), sprueAllowanceMl: getTeamSettings(db(), member.team.id)?.sprueAllowanceMl ?? 0 }}
+        production={{ canDecide: roleAtLeast(member.role, 'lead'), sprueAllowanceMl: settings?.sprueAllowanceMl ?? 0, volumeUnit: settings?.volumeUnit ?? 'cups' }}
       />
     </Suspense>
   );
