@@ -16,14 +16,24 @@ import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { apiFetch, swrFetcher } from '@/lib/http/client';
 import type { UploadedPhoto } from '@/lib/uploads/limits';
+import { parseAmount } from '@/lib/recipes/parseAmount';
 import { recipeLineSchema } from '@/lib/validations/match';
 import { type ColorantOption, RecipeLines } from './recipe-lines';
 
 const optionalNumber = (schema: z.ZodNumber) => z.preprocess((v) => (v === '' || Number.isNaN(v) ? undefined : v), schema.optional());
+// Batch size as a maker says it ("1 1/2", "¾"), through the one dose parser.
+const optionalAmount = (schema: z.ZodNumber) =>
+  z.preprocess((v, ctx) => {
+    if (v === '' || v === undefined || v === null || Number.isNaN(v)) return undefined;
+    const r = parseAmount(v as string | number);
+    if (r.ok) return r.value;
+    ctx.addIssue({ code: 'custom', message: r.message });
+    return z.NEVER;
+  }, schema.optional());
 const formSchema = z.object({
   recipe: z.array(recipeLineSchema.and(z.object({ colorantId: z.string().min(1, 'choose a colorant') }))),
   moldId: z.string().optional(),
-  batchCups: optionalNumber(z.number().gt(0, 'batch size must be more than 0').max(400)),
+  batchCups: optionalAmount(z.number().gt(0, 'batch size must be more than 0').max(400)),
   tempF: optionalNumber(z.number().min(32, 'at least 32 °F').max(500, 'at most 500 °F')),
   notes: z.string().max(4000).optional(),
   correctsPourId: z.string().optional(),
@@ -91,7 +101,7 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
           </select>
         </Field>
         <Field label="Batch size (cups)" error={formState.errors.batchCups?.message}>
-          <input type="number" step="any" min="0" className={inputClass} {...register('batchCups', { valueAsNumber: true })} />
+          <input type="text" inputMode="decimal" autoComplete="off" className={inputClass} {...register('batchCups')} />
         </Field>
         <Field label="Pour / injection temperature (°F)" error={formState.errors.tempF?.message}>
           <input type="number" step="1" className={inputClass} {...register('tempF', { valueAsNumber: true })} />

@@ -14,17 +14,25 @@ import type { BatchView } from '@/db/queries/batches';
 import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { apiFetch, swrFetcher } from '@/lib/http/client';
-import { moldYield } from '@/lib/recipes';
+import { moldYield, parseAmount } from '@/lib/recipes';
 import type { UploadedPhoto } from '@/lib/uploads/limits';
 import { MAX_BAITS, MAX_BATCH_CUPS } from '@/lib/validations/production';
 
 type Mold = { id: string; name: string; cavities: number; mlPerCavity: number };
 // Number inputs give strings: empty is "not given", anything else a number (NaN fails).
 const blank = (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v));
+// The batch size as a maker says it ("1 1/2", "¾", "0,5"), through the one dose parser.
+const amount = (v: unknown, ctx: z.RefinementCtx) => {
+  if (blank(v) === undefined) return undefined;
+  const r = parseAmount(v as string | number);
+  if (r.ok) return r.value;
+  ctx.addIssue({ code: 'custom', message: r.message });
+  return z.NEVER;
+};
 const count = (name: string) =>
   z.preprocess(blank, z.number().int(`${name} is a whole number`).min(0, `${name} cannot be negative`).max(MAX_BAITS).optional());
 const formSchema = z.object({
-  cups: z.preprocess(blank, z.number({ error: 'give the batch size in cups' }).gt(0, 'more than 0 cups').max(MAX_BATCH_CUPS, `at most ${MAX_BATCH_CUPS} cups`)),
+  cups: z.preprocess(amount, z.number({ error: 'give the batch size in cups' }).gt(0, 'more than 0 cups').max(MAX_BATCH_CUPS, `at most ${MAX_BATCH_CUPS} cups`)),
   moldId: z.string().optional(),
   baitsExpected: count('the expected count'),
   baits: count('the bait count'),
@@ -58,7 +66,8 @@ function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds }: Pr
   });
   const zones = std.zones.map((z) => z.name);
   const missing = zones.filter((z) => !shapes[z]);
-  const cups = Number(watch('cups'));
+  const parsedCups = parseAmount(watch('cups') as string);
+  const cups = parsedCups.ok ? parsedCups.value : Number.NaN;
   const mold = molds.find((m) => m.id === watch('moldId'));
   const yieldHint = mold && cups > 0 && cups <= MAX_BATCH_CUPS ? moldYield(cups, mold, sprueAllowanceMl) : null;
 
@@ -92,7 +101,7 @@ function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds }: Pr
     <form onSubmit={onSubmit} noValidate aria-label="Log a batch" className="space-y-4">
       <div className="grid gap-3 sm:grid-cols-2">
         <Field label="Batch size (cups)" error={e.cups?.message}>
-          <input type="number" inputMode="decimal" step="any" min="0" className={inputClass} {...register('cups')} />
+          <input type="text" inputMode="decimal" autoComplete="off" className={inputClass} {...register('cups')} />
         </Field>
         <Field label="Mold" hint={std.mold ? `The standard was poured in ${std.mold}.` : undefined}>
           <select className={inputClass} {...register('moldId')}>

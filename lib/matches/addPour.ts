@@ -1,12 +1,13 @@
 import { and, eq, inArray, isNull, max } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { Member } from '@/db/queries/members';
-import { colorants, matches, molds, pours, recipeLines, samples } from '@/db/schema';
+import { colorants, matches, molds, pours, recipeLines, samples, teams } from '@/db/schema';
 import { compareLab } from '@/lib/color';
 import { recordAudit } from '@/lib/audit';
 import { newId } from '@/lib/auth/tokens';
 import { ApiError } from '@/lib/http/api';
 import type { PourInput } from '@/lib/validations/match';
+import { toLibraryUnits } from './libraryUnits';
 import { assertZonesOfMatch, loadMatch } from './loadMatch';
 import { measureZones } from './measureZones';
 
@@ -26,14 +27,17 @@ export async function addPour(database: DB, member: Member, matchId: string, inp
     if (!zoneNames.has(l.zone)) throw new ApiError(400, 'invalid_body', `recipe[${i}].zone: "${l.zone}" is not a zone of this match`);
   });
   const colorantIds = [...new Set(input.recipe.map((l) => l.colorantId))];
-  const known = new Set(
-    colorantIds.length
-      ? database.select({ id: colorants.id }).from(colorants).where(and(eq(colorants.teamId, teamId), inArray(colorants.id, colorantIds), isNull(colorants.archivedAt))).all().map((c) => c.id)
-      : [],
+  const known = new Map(
+    (colorantIds.length
+      ? database.select({ id: colorants.id, name: colorants.name, unit: colorants.unit }).from(colorants).where(and(eq(colorants.teamId, teamId), inArray(colorants.id, colorantIds), isNull(colorants.archivedAt))).all()
+      : []
+    ).map((c) => [c.id, c]),
   );
   input.recipe.forEach((l, i) => {
     if (!known.has(l.colorantId)) throw new ApiError(400, 'invalid_body', `recipe[${i}].colorantId: no such colorant in your library (or it was archived)`);
   });
+  const team = database.select({ dropsPerMl: teams.dropsPerMl }).from(teams).where(eq(teams.id, teamId)).get()!;
+  const recipe = toLibraryUnits(input.recipe, known, team.dropsPerMl);
   if (input.moldId && !database.select({ id: molds.id }).from(molds).where(and(eq(molds.id, input.moldId), eq(molds.teamId, teamId), isNull(molds.archivedAt))).get()) {
     throw new ApiError(400, 'invalid_body', 'moldId: no such mold in your library (or it was archived)');
   }
@@ -51,7 +55,7 @@ export async function addPour(database: DB, member: Member, matchId: string, inp
         tempF: input.tempF ?? null, notes: input.notes ?? null, correctsPourId: input.correctsPourId ?? null, createdBy: member.user.id,
       })
       .run();
-    input.recipe.forEach((l, position) => tx.insert(recipeLines).values({ id: newId(), pourId: id, position, ...l }).run());
+    recipe.forEach((l, position) => tx.insert(recipeLines).values({ id: newId(), pourId: id, position, ...l }).run());
     measured.regions.forEach((r, i) => {
       const z = zoneRows.find((zr) => zr.name === r.name)!;
       const cmp = compareLab({ l: z.targetL!, a: z.targetA!, b: z.targetB! }, r.lab, match.tolerance);
