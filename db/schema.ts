@@ -37,6 +37,8 @@ export const teams = sqliteTable('teams', {
   // Drops per millilitre depend on the dropper; about 20 is common practice.
   dropsPerMl: real('drops_per_ml').notNull().default(20),
   sprueAllowanceMl: real('sprue_allowance_ml').notNull().default(0),
+  // The shop's IANA time zone: dates on pages and printed sheets read in it.
+  timeZone: text('time_zone').notNull().default('UTC'),
   createdAt: integer('created_at').notNull().default(now),
 });
 
@@ -174,6 +176,9 @@ export const matches = sqliteTable(
     createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: integer('created_at').notNull().default(now),
     updatedAt: integer('updated_at').notNull().default(now),
+    // A reference photo uploaded for the target but not yet measured: kept with
+    // the match at once, so a reload or a walk away does not lose it.
+    draftPhotoId: text('draft_photo_id').references(() => photos.id, { onDelete: 'set null' }),
   },
   (t) => [index('matches_team_idx').on(t.teamId)],
 );

@@ -67,10 +67,10 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
       <section aria-labelledby="target-h" className="space-y-3">
         <h2 id="target-h" className="text-lg font-semibold">Target</h2>
         {match.target ? <TargetSwatches target={match.target} photoCount={match.target.photos.length} /> : <p className="text-ink-soft">No target yet: sample every zone on a reference photo.</p>}
-        {editable && (!match.target || mode === 'reference') ? (
+        {editable && (!match.target || mode === 'reference' || match.draft) ? (
           <TargetSampling match={match} onSaved={() => { setMode('compare'); void mutate(); }} />
         ) : null}
-        {editable && match.target && mode !== 'reference' ? (
+        {editable && match.target && mode !== 'reference' && !match.draft ? (
           <Button variant="secondary" onClick={() => setMode('reference')}>Add another reference photo</Button>
         ) : null}
       </section>

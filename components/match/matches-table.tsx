@@ -10,6 +10,7 @@ import {
   useReactTable,
 } from '@tanstack/react-table';
 import Link from 'next/link';
+import { When } from '@/components/ui/when';
 import { useMemo, useState } from 'react';
 import { BandBadge } from '@/components/color/band-badge';
 import { inputClass } from '@/components/ui/field';
@@ -56,7 +57,7 @@ const columns: ColumnDef<MatchView>[] = [
       );
     },
   },
-  { id: 'activity', header: 'Last activity', accessorFn: (m) => m.updatedAt, cell: ({ getValue }) => new Date(getValue<number>()).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' }) },
+  { id: 'activity', header: 'Last activity', accessorFn: (m) => m.updatedAt, cell: ({ getValue }) => <When at={getValue<number>()} dayOnly /> },
   { id: 'maker', header: 'Started by', accessorFn: (m) => m.createdBy ?? '—' },
 ];
 

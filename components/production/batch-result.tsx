@@ -8,13 +8,15 @@ import { RegionsOnPhoto } from '@/components/match/regions-on-photo';
 import type { BatchView } from '@/db/queries/batches';
 import type { Shape } from '@/lib/color/types';
 import { PassBadge } from './pass-badge';
-import { when } from './when';
+import { useShopTimeZone } from '@/components/ui/when';
+import { formatWhen } from '@/lib/format/dates';
 
 const lab = (l: { l: number; a: number; b: number }) => `L* ${l.l.toFixed(1)} a* ${l.a.toFixed(1)} b* ${l.b.toFixed(1)}`;
 
 // One production batch against its standard: pass or fail, then per zone the
 // standard and the batch side by side on the stage, with the figures beside.
 export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: () => void }) {
+  const tz = useShopTimeZone();
   const [surround, setSurround] = useState<Surround>('grey');
   const over = batch.zones.filter((z) => !z.withinTolerance).map((z) => z.name);
   return (
@@ -32,7 +34,7 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
           : `Over the tolerance of ${batch.tolerance.toFixed(1)} ΔE00 against standard pour #${batch.standardPourNumber}: ${over.join(', ')}. The leads have been e-mailed.`}
       </p>
       <p className="num text-sm text-ink-soft">
-        {[when(batch.createdAt), batch.createdBy ? `logged by ${batch.createdBy}` : null, batch.mold,
+        {[formatWhen(batch.createdAt, tz), batch.createdBy ? `logged by ${batch.createdBy}` : null, batch.mold,
           batch.baits !== null ? `${batch.baits} baits` : null, batch.baitsExpected !== null ? `${batch.baitsExpected} expected` : null, batch.notes]
           .filter(Boolean).join(' · ')}
       </p>

@@ -1,10 +1,10 @@
 import Link from 'next/link';
 import { SAFETY_CAUTIONS, TEMPERATURE_CAUTION } from '@/lib/batches/safetyCautions';
-import { amount } from './dose';
+import { formatCups, formatLab, formatMl, formatTemp } from '@/lib/format';
 import { PassBadge } from './pass-badge';
 import { PrintButton } from './print-button';
 import { type Sheet, SheetMolds, SheetRecipe } from './sheet-tables';
-import { day } from './when';
+import { When } from '@/components/ui/when';
 
 const box = 'rounded-lg border border-panel-line bg-white p-4';
 
@@ -37,11 +37,11 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
           </div>
         </div>
         <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-4">
-          <Item label="Batch size"><span className="num">{amount(sheet.cups)} cups ({sheet.batchMl.toFixed(0)} mL)</span></Item>
+          <Item label="Batch size"><span className="num">{formatCups(sheet.cups)} ({formatMl(sheet.batchMl)})</span></Item>
           <Item label="Standard">pour #{sheet.standard.number}</Item>
           <Item label="Mold">{mold ? mold.name : 'not given'}</Item>
           <Item label="Expected yield"><span className="num">{sheet.batch.baitsExpected ?? mold?.baits ?? '—'} baits</span></Item>
-          <Item label="Logged"><span className="num">{day(sheet.batch.createdAt)}</span></Item>
+          <Item label="Logged"><span className="num"><When at={sheet.batch.createdAt} dayOnly /></span></Item>
           <Item label="QC against the standard"><PassBadge pass={sheet.batch.pass} /></Item>
           <Item label="Tolerance"><span className="num">{sheet.match.tolerance.toFixed(1)} ΔE00</span></Item>
           <Item label="Baits counted"><span className="num">{sheet.batch.baits ?? '____'}</span></Item>
@@ -58,7 +58,7 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
         {sheet.tempF === null || sheet.tempC === null ? (
           <p className="text-sm">The standard pour has no temperature recorded.</p>
         ) : (
-          <p className="num text-2xl font-semibold">{amount(sheet.tempF)} °F <span className="font-normal">({sheet.tempC.toFixed(0)} °C)</span></p>
+          <p className="num text-2xl font-semibold">{formatTemp(sheet.tempF)}</p>
         )}
         {sheet.tempNote ? <p className="mt-1 text-sm font-semibold"><span aria-hidden>▲ </span>{sheet.tempNote}</p> : null}
         <p className="mt-1 text-sm">{TEMPERATURE_CAUTION}</p>
@@ -78,7 +78,7 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
               <div className="swatch h-14 rounded-sm border border-stage-rule" style={{ background: l.hex ?? '#777777', ['--swatch' as string]: l.hex ?? '#777777' }} />
               <p className="mt-1 text-sm font-semibold capitalize text-white">{l.zone}</p>
               <p className="text-xs text-white">{layerLabel(l.position, sheet.layout.length)}</p>
-              {l.lab ? <p className="num text-xs text-white">L* {l.lab.l.toFixed(1)} a* {l.lab.a.toFixed(1)} b* {l.lab.b.toFixed(1)}</p> : null}
+              {l.lab ? <p className="num text-xs text-white">{formatLab(l.lab)}</p> : null}
             </li>
           ))}
         </ol>

@@ -10,7 +10,7 @@ import { BatchForm } from './batch-form';
 import { BatchResult } from './batch-result';
 import { PassBadge } from './pass-badge';
 import { RunChart } from './run-chart';
-import { when } from './when';
+import { When } from '@/components/ui/when';
 
 type Props = {
   match: MatchDetail;
@@ -91,7 +91,7 @@ export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSe
                   className={`flex min-h-tap w-full flex-wrap items-center gap-x-4 gap-y-1 rounded-md border px-3 py-2 text-left text-sm ${b.id === selectedId ? 'border-ink bg-white shadow-sm' : 'border-panel-line bg-panel'}`}
                 >
                   <PassBadge pass={b.pass} />
-                  <span className="num">{when(b.createdAt)}</span>
+                  <span className="num"><When at={b.createdAt} /></span>
                   <span className="num">{b.cups} cups{b.mold ? ` · ${b.mold}` : ''}</span>
                   <span className="num">{b.zones.map((z) => `${z.name} ${z.dE00.toFixed(1)} ΔE00`).join(' · ')}</span>
                 </button>

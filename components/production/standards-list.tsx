@@ -1,9 +1,9 @@
 import Link from 'next/link';
 import { StatusBadge } from '@/components/match/status-badge';
 import type { StandardView } from '@/db/queries/standards';
-import { dose } from './dose';
+import { formatDose, formatLab, formatTemp } from '@/lib/format';
 import { PassBadge } from './pass-badge';
-import { day } from './when';
+import { When } from '@/components/ui/when';
 
 const linkClass = 'inline-flex min-h-tap items-center rounded-md border border-panel-line bg-white px-4 font-medium';
 
@@ -27,14 +27,14 @@ export function StandardsList({ standards }: { standards: StandardView[] }) {
             <p className="text-sm text-ink-soft">
               Standard: pour #{s.standardPourNumber}
               {s.approvedBy ? ` · approved by ${s.approvedBy}` : ''}
-              {s.approvedAt ? ` on ${day(s.approvedAt)}` : ''}
+              {s.approvedAt ? <> on <When at={s.approvedAt} dayOnly /></> : ''}
             </p>
             <ul aria-label={`${s.name} colours`} className="flex flex-wrap gap-4 rounded-md bg-stage p-4">
               {s.zones.map((z) => (
                 <li key={z.name} className="w-32 sm:w-36">
                   <div className="h-20 rounded-sm border border-stage-rule" style={{ background: z.hex }} />
                   <p className="mt-1 text-sm font-semibold capitalize text-white">{z.name}</p>
-                  <p className="num text-xs text-white">L* {z.lab.l.toFixed(1)} a* {z.lab.a.toFixed(1)} b* {z.lab.b.toFixed(1)}</p>
+                  <p className="num text-xs text-white">{formatLab(z.lab)}</p>
                 </li>
               ))}
             </ul>
@@ -43,13 +43,13 @@ export function StandardsList({ standards }: { standards: StandardView[] }) {
               <Figure label="Batches"><span className="num">{s.batchCount}</span></Figure>
               <Figure label="Last batch">
                 {s.lastBatch ? (
-                  <span className="flex flex-wrap items-center gap-2"><PassBadge pass={s.lastBatch.pass} /><span className="num">{day(s.lastBatch.createdAt)}</span></span>
+                  <span className="flex flex-wrap items-center gap-2"><PassBadge pass={s.lastBatch.pass} /><span className="num"><When at={s.lastBatch.createdAt} dayOnly /></span></span>
                 ) : (
                   'none yet'
                 )}
               </Figure>
               <Figure label="Temperature">
-                <span className="num">{s.tempF === null ? 'not recorded' : `${s.tempF} °F (${(((s.tempF - 32) * 5) / 9).toFixed(0)} °C)`}</span>
+                <span className="num">{s.tempF === null ? 'not recorded' : formatTemp(s.tempF)}</span>
               </Figure>
             </dl>
             <div>
@@ -64,7 +64,7 @@ export function StandardsList({ standards }: { standards: StandardView[] }) {
                       <dd>
                         <ul>
                           {s.recipe.filter((r) => r.zone === zone).map((l, i) => (
-                            <li key={`${l.colorantId}-${i}`}><span className="num font-medium">{dose(l.amount, l.unit)}</span> {l.colorant}</li>
+                            <li key={`${l.colorantId}-${i}`}><span className="num font-medium">{formatDose(l.amount, l.unit)}</span> {l.colorant}</li>
                           ))}
                         </ul>
                       </dd>

@@ -26,3 +26,9 @@ export function formatWhen(at: number, timeZone?: string | null): string {
 export function formatDay(at: number, timeZone?: string | null): string {
   return new Intl.DateTimeFormat(LOCALE, { timeZone: zoneOr(timeZone), day: 'numeric', month: 'short', year: 'numeric' }).format(at);
 }
+
+/** Every IANA zone this runtime knows, UTC first. */
+export function timeZoneList(): string[] {
+  const all = typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : [];
+  return [DEFAULT_TIME_ZONE, ...all.filter((z) => z !== DEFAULT_TIME_ZONE)];
+}

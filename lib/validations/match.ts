@@ -85,3 +85,5 @@ export const pourSchema = z.object({
 
 export type TargetInput = z.infer<typeof targetSchema>;
 export type PourInput = z.infer<typeof pourSchema>;
+
+export const draftPhotoSchema = z.object({ photoId: idField });

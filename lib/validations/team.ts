@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isTimeZone } from '@/lib/format/dates';
 import { VOLUME_UNITS } from '@/lib/recipes/units';
 
 export const teamSettingsSchema = z.object({
@@ -6,4 +7,6 @@ export const teamSettingsSchema = z.object({
   volumeUnit: z.enum(VOLUME_UNITS, { error: `unit must be one of ${VOLUME_UNITS.join(', ')}` }),
   dropsPerMl: z.coerce.number({ error: 'drops per mL must be a number' }).min(5, 'drops per mL must be at least 5').max(60, 'drops per mL must be at most 60'),
   sprueAllowanceMl: z.coerce.number({ error: 'sprue allowance must be a number' }).min(0, 'sprue allowance cannot be negative').max(500, 'sprue allowance must be at most 500 mL'),
+  // The shop's time zone (IANA name): dates on pages and printed sheets read in it.
+  timeZone: z.string().trim().max(64).refine(isTimeZone, 'choose a time zone from the list').optional(),
 });

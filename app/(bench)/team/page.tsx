@@ -3,6 +3,7 @@ import { listTeamMembers } from '@/db/queries/members';
 import { getTeamSettings } from '@/db/queries/teams';
 import { InviteForm } from '@/components/team/invite-form';
 import { SettingsForm } from '@/components/team/settings-form';
+import { timeZoneList } from '@/lib/format/dates';
 import { MemberRowActions } from '@/components/team/member-row-actions';
 import { requirePageMember } from '@/lib/auth/current';
 import { listOpenInvitations } from '@/lib/team/invitations';
@@ -64,7 +65,7 @@ export default async function TeamPage() {
       {isOwner ? (
         <div className="rounded-lg border border-panel-line bg-white p-4">
           <h2 className="mb-3 text-lg font-semibold">Shop settings</h2>
-          <SettingsForm settings={getTeamSettings(db(), member.team.id)!} action={saveTeamSettings} />
+          <SettingsForm settings={getTeamSettings(db(), member.team.id)!} timeZones={timeZoneList()} action={saveTeamSettings} />
         </div>
       ) : null}
     </section>
