@@ -5,6 +5,7 @@ import { useState } from 'react';
 import useSWR from 'swr';
 import { MatchBatches } from '@/components/production/match-batches';
 import { SignOffPanel } from '@/components/production/signoff-panel';
+import { NEUTRAL } from '@/components/sampler/photo-sampler';
 import { Button } from '@/components/ui/button';
 import type { MatchDetail } from '@/db/queries/matchDetail';
 import type { PourView } from '@/db/queries/pours';
@@ -38,8 +39,11 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
   const selectedIndex = match.pours.findIndex((p) => p.id === selectedId);
   const previousId = selectedIndex > 0 ? match.pours[selectedIndex - 1]!.id : null;
   const editable = canPour && match.status === 'open';
-  const lastShapes = (): Record<string, Shape> =>
-    Object.fromEntries((latestPour?.zones ?? match.target?.photos[0]?.zones ?? []).map((z) => [z.name, z.shape as Shape]));
+  // …and the grey card where it was last marked, if any photo of the match had one.
+  const lastShapes = (): Record<string, Shape> => ({
+    ...Object.fromEntries((latestPour?.zones ?? match.target?.photos[0]?.zones ?? []).map((z) => [z.name, z.shape as Shape])),
+    ...(match.lastNeutral ? { [NEUTRAL]: match.lastNeutral.shape } : {}),
+  });
   const select = (id: string) => {
     setMode('compare');
     router.replace(`/matches/${matchId}?pour=${id}`, { scroll: false });

@@ -7,6 +7,7 @@ import { RegionsOnPhoto } from '@/components/match/regions-on-photo';
 import type { PourView } from '@/db/queries/pours';
 import type { TargetDetail } from '@/db/queries/matchDetail';
 import { swrFetcher } from '@/lib/http/client';
+import { LightNote } from './light-note';
 import { NextPourHint } from './next-pour-hint';
 import { RecipeDiff } from './recipe-diff';
 import { ZoneReadout } from './zone-readout';
@@ -33,7 +34,10 @@ export function PourCompare({ pourId, previousId, target }: { pourId: string; pr
             <h4 className="mb-2 font-semibold capitalize">{z.name}</h4>
             <SwatchPair surround={surround} left={z.target.hex} right={z.hex} leftLabel="target" rightLabel={`pour #${pour.number}`} />
           </div>
-          <ZoneReadout zone={z} targetFlake={target.zones.find((t) => t.name === z.name)?.flakeCoverage ?? null} />
+          <div className="space-y-1">
+            <ZoneReadout zone={z} targetFlake={target.zones.find((t) => t.name === z.name)?.flakeCoverage ?? null} />
+            <LightNote light={pour.light} />
+          </div>
         </div>
       ))}
       <NextPourHint pourId={pour.id} />

@@ -18,6 +18,7 @@ import { apiFetch, swrFetcher } from '@/lib/http/client';
 import type { UploadedPhoto } from '@/lib/uploads/limits';
 import { parseAmount } from '@/lib/recipes/parseAmount';
 import { recipeLineSchema } from '@/lib/validations/match';
+import { CardCarriedNote } from './light-note';
 import { type ColorantOption, RecipeLines } from './recipe-lines';
 
 const optionalNumber = (schema: z.ZodNumber) => z.preprocess((v) => (v === '' || Number.isNaN(v) ? undefined : v), schema.optional());
@@ -79,7 +80,7 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
           notes: parsed.notes || undefined,
           correctsPourId: parsed.correctsPourId || undefined,
           zones: match.zones.map((name) => ({ name, shape: shapes[name] })),
-          neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL] } : undefined,
+          neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL], ...(match.lastNeutral?.L ? { L: match.lastNeutral.L } : {}) } : undefined,
         }),
       });
       onSaved(pour.id);
@@ -122,7 +123,8 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
       {photo ? (
         <>
           <PhotoSampler src={`/api/photos/${photo.photoId}/image`} width={photo.width} height={photo.height} zones={match.zones} initialShapes={initialShapes} withNeutral onChange={onShapes} />
-          {shapes[NEUTRAL] ? null : (
+          <CardCarriedNote neutral={match.lastNeutral} marked={Boolean(shapes[NEUTRAL])} />
+          {shapes[NEUTRAL] || match.lastNeutral ? null : (
             <p className="text-sm text-ink-soft">
               No grey card marked: a change of light between this photo and the reference will read as a colour difference. Mark the card if it is in frame.
             </p>

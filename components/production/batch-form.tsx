@@ -10,7 +10,10 @@ import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
 import { PhotoDropzone } from '@/components/upload/photo-dropzone';
+import { CardCarriedNote } from '@/components/match/light-note';
 import type { BatchView } from '@/db/queries/batches';
+import type { NeutralMark } from '@/db/queries/light';
+import type { MatchDetail } from '@/db/queries/matchDetail';
 import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { apiFetch, swrFetcher } from '@/lib/http/client';
@@ -48,14 +51,15 @@ type Props = { matchId: string; standardPourId: string; sprueAllowanceMl: number
 export function BatchForm(props: Props) {
   const { data: std, error } = useSWR<PourView>(`/api/pours/${props.standardPourId}`, swrFetcher);
   const { data: molds, error: moldError } = useSWR<Mold[]>('/api/molds', swrFetcher);
+  const { data: match } = useSWR<MatchDetail>(`/api/matches/${props.matchId}`, swrFetcher);
   const failed = error ?? moldError;
   if (failed) return <p role="alert" className="text-band-off">Could not load the standard or the molds: {(failed as Error).message}</p>;
   // The form starts from the standard's mold, so its options must be there first.
-  if (!std || !molds) return <p role="status" className="text-ink-soft">Loading the standard…</p>;
-  return <BatchFormFields {...props} std={std} molds={molds} />;
+  if (!std || !molds || !match) return <p role="status" className="text-ink-soft">Loading the standard…</p>;
+  return <BatchFormFields {...props} std={std} molds={molds} neutral={match.lastNeutral} />;
 }
 
-function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds }: Props & { std: PourView; molds: Mold[] }) {
+function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds, neutral }: Props & { std: PourView; molds: Mold[]; neutral: NeutralMark | null }) {
   const [photo, setPhoto] = useState<UploadedPhoto | null>(null);
   const [shapes, setShapes] = useState<Record<string, Shape>>({});
   const [error, setError] = useState<string | null>(null);
@@ -82,7 +86,7 @@ function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds }: Pr
         body: JSON.stringify({
           photoId: photo.photoId,
           zones: zones.map((name) => ({ name, shape: shapes[name] })),
-          neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL] } : undefined,
+          neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL], ...(neutral?.L ? { L: neutral.L } : {}) } : undefined,
           cups: v.cups,
           moldId: v.moldId || null,
           baitsExpected: v.baitsExpected ?? null,
@@ -133,10 +137,11 @@ function BatchFormFields({ matchId, sprueAllowanceMl, onLogged, std, molds }: Pr
             width={photo.width}
             height={photo.height}
             zones={zones}
-            initialShapes={Object.fromEntries(std.zones.map((z) => [z.name, z.shape as Shape]))}
+            initialShapes={{ ...Object.fromEntries(std.zones.map((z) => [z.name, z.shape as Shape])), ...(neutral ? { [NEUTRAL]: neutral.shape } : {}) }}
             withNeutral
             onChange={onShapes}
           />
+          <CardCarriedNote neutral={neutral} marked={Boolean(shapes[NEUTRAL])} />
         </>
       ) : (
         <div className="space-y-2">

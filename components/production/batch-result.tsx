@@ -3,6 +3,8 @@
 import Link from 'next/link';
 import { useState } from 'react';
 import { DeltaReadout } from '@/components/color/delta-readout';
+import { LightNote } from '@/components/match/light-note';
+import { formatLab } from '@/lib/format';
 import { SurroundToggle, SwatchPair, type Surround } from '@/components/color/swatch-pair';
 import { RegionsOnPhoto } from '@/components/match/regions-on-photo';
 import type { BatchView } from '@/db/queries/batches';
@@ -11,7 +13,7 @@ import { PassBadge } from './pass-badge';
 import { useShopTimeZone } from '@/components/ui/when';
 import { formatWhen } from '@/lib/format/dates';
 
-const lab = (l: { l: number; a: number; b: number }) => `L* ${l.l.toFixed(1)} a* ${l.a.toFixed(1)} b* ${l.b.toFixed(1)}`;
+const lab = formatLab;
 
 // One production batch against its standard: pass or fail, then per zone the
 // standard and the batch side by side on the stage, with the figures beside.
@@ -53,6 +55,7 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
           <div className="space-y-1 text-sm">
             <DeltaReadout d={z} direction={z.direction?.text} extra={<span className="font-medium">{z.withinTolerance ? 'within tolerance' : 'over tolerance'}</span>} />
             <p className="num text-ink-soft">Batch {lab(z.lab)}{z.standard ? ` · standard ${lab(z.standard.lab)}` : ''}</p>
+            <LightNote light={batch.light} />
           </div>
         </div>
       ))}

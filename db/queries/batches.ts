@@ -1,6 +1,7 @@
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import { describeDifference, labToHex } from '../../lib/color';
 import { sampleFigures } from './pours';
+import { lightState } from './light';
 import type { DB } from '../open';
 import { batches, matches, molds, pours, samples, users, zones } from '../schema';
 
@@ -57,6 +58,8 @@ function batchViews(database: DB, teamId: string, where: { batchId?: string; mat
       tolerance,
       pass: b.pass,
       zones: zs,
+      // Against the standard's photo: was each corrected from a grey card?
+      light: lightState(batchSamples.filter((s) => s.batchId === b.id), stdSamples.some((s) => s.pourId === b.standardPourId && (s.whiteBalance as { applied?: boolean } | null)?.applied)),
       cups: b.cups,
       moldId: b.moldId,
       mold,

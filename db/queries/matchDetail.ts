@@ -2,6 +2,7 @@ import { and, asc, eq } from 'drizzle-orm';
 import type { Shape } from '../../lib/color/types';
 import type { DB } from '../open';
 import { matches, photos, samples } from '../schema';
+import { type NeutralMark, lastNeutral, targetHasCard } from './light';
 import { getMatch, type MatchView } from './matches';
 
 export type TargetPhoto = { photoId: string; width: number; height: number; zones: { name: string; shape: Shape; lab: { l: number; a: number; b: number }; hex: string }[] };
@@ -10,7 +11,7 @@ export type TargetDetail = {
   photos: TargetPhoto[];
 };
 export type DraftPhoto = { photoId: string; width: number; height: number };
-export type MatchDetail = Omit<MatchView, 'target'> & { target: TargetDetail | null; targetPhotos: TargetPhoto[]; draft: DraftPhoto | null };
+export type MatchDetail = Omit<MatchView, 'target'> & { target: TargetDetail | null; targetPhotos: TargetPhoto[]; draft: DraftPhoto | null; lastNeutral: NeutralMark | null; targetHasCard: boolean };
 
 // A match with the reference photos its target was sampled on and each
 // zone's region, for the bench. `target` keeps the API's shape, with extras.
@@ -46,5 +47,5 @@ export function getMatchDetail(database: DB, teamId: string, matchId: string): M
       .innerJoin(photos, and(eq(photos.id, matches.draftPhotoId), eq(photos.teamId, teamId)))
       .where(and(eq(matches.id, matchId), eq(matches.teamId, teamId)))
       .get() ?? null;
-  return { ...match, target, targetPhotos, draft };
+  return { ...match, target, targetPhotos, draft, lastNeutral: lastNeutral(database, teamId, matchId), targetHasCard: targetHasCard(database, teamId, matchId) };
 }
