@@ -54,7 +54,7 @@ export function SignOffPanel({ match, pourId, canSubmit, canDecide }: Props) {
         await apiFetch(`/api/pours/${pourId}/sign-off`, { method: 'POST', body: JSON.stringify({ decision: action, comment: comment || null }) });
       }
       setText('');
-      await Promise.all([mutate(`/api/matches/${match.id}`), mutate(`/api/pours/${pourId}`), mutate(`/api/matches/${match.id}/history`)]);
+      await Promise.all([mutate('/api/sign-off-queue'), mutate(`/api/matches/${match.id}`), mutate(`/api/pours/${pourId}`), mutate(`/api/matches/${match.id}/history`)]);
     } catch (e) {
       setError((e as Error).message);
     } finally {
