@@ -12,6 +12,7 @@ import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { swrFetcher } from '@/lib/http/client';
 import { DeltaChart } from './delta-chart';
+import { FocusFirstField, JumpBar } from './match-sections';
 import { PourCompare } from './pour-compare';
 import { PourForm } from './pour-form';
 import { PourList } from './pour-list';
@@ -68,7 +69,9 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
         </p>
       </header>
 
-      <section aria-labelledby="target-h" className="space-y-3">
+      <JumpBar match={match} hasSelection={Boolean(selectedId)} />
+
+      <section id="target" aria-labelledby="target-h" className="scroll-mt-16 space-y-3">
         <h2 id="target-h" className="text-lg font-semibold">Target</h2>
         {match.target ? <TargetSwatches target={match.target} photoCount={match.target.photos.length} /> : <p className="text-ink-soft">No target yet: sample every zone on a reference photo.</p>}
         {editable && (!match.target || mode === 'reference' || match.draft) ? (
@@ -80,7 +83,7 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
       </section>
 
       {match.target ? (
-        <section aria-labelledby="pours-h" className="space-y-3">
+        <section id="pours" aria-labelledby="pours-h" className="scroll-mt-16 space-y-3">
           <div className="flex flex-wrap items-center justify-between gap-2">
             <h2 id="pours-h" className="text-lg font-semibold">Pours</h2>
             {canPour && match.status !== 'archived' && mode !== 'pour' ? <Button onClick={() => setMode('pour')}>New pour</Button> : null}
@@ -88,18 +91,26 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
           <PourList pours={match.pours} selectedId={selectedId} onSelect={select} />
           <DeltaChart match={match} />
           {mode === 'pour' ? (
-            <div className="rounded-lg border border-panel-line bg-white p-4">
+            <FocusFirstField className="rounded-lg border border-panel-line bg-white p-4">
               <div className="mb-3 flex items-center justify-between">
                 <h3 className="text-lg font-semibold">Pour #{(latest?.number ?? 0) + 1}</h3>
                 <Button variant="secondary" onClick={() => setMode('compare')}>Cancel</Button>
               </div>
               {latestPourId && !latestPour ? <p role="status" className="text-ink-soft">Loading the last pour…</p> : null}
               {!latestPourId || latestPour ? <PourForm match={match} initialShapes={lastShapes()} previous={latestPour} onSaved={(id) => { void mutate(); select(id); }} /> : null}
-            </div>
+            </FocusFirstField>
           ) : null}
-          {mode === 'compare' && selectedId && match.target ? <PourCompare key={selectedId} pourId={selectedId} previousId={previousId} target={match.target} /> : null}
-          {mode === 'compare' && selectedId ? <SignOffPanel key={`signoff-${selectedId}`} match={match} pourId={selectedId} canSubmit={canPour} canDecide={production.canDecide} /> : null}
         </section>
+      ) : null}
+      {match.target && mode === 'compare' && selectedId ? (
+        <div id="compare" className="scroll-mt-16">
+          <PourCompare key={selectedId} pourId={selectedId} previousId={previousId} target={match.target} />
+        </div>
+      ) : null}
+      {match.target && mode === 'compare' && selectedId ? (
+        <div id="signoff" className="scroll-mt-16">
+          <SignOffPanel key={`signoff-${selectedId}`} match={match} pourId={selectedId} canSubmit={canPour} canDecide={production.canDecide} />
+        </div>
       ) : null}
 
       <MatchBatches match={match} canLog={canPour} sprueAllowanceMl={production.sprueAllowanceMl} selectedId={params.get('batch')} onSelect={selectBatch} />

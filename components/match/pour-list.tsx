@@ -2,12 +2,12 @@ import { BandBadge } from '@/components/color/band-badge';
 import type { PourSummary } from '@/db/queries/matches';
 import { bandFor } from '@/lib/color/bandFor';
 
-// Pour numbers as large buttons, each with its worst zone's ΔE00 and band.
+// Pour numbers as large buttons, latest first, each with its worst zone's ΔE00 and band.
 export function PourList({ pours, selectedId, onSelect }: { pours: PourSummary[]; selectedId: string | null; onSelect: (id: string) => void }) {
   if (pours.length === 0) return <p className="text-ink-soft">No pours yet. Pour a test bait, photograph it under the same light, and add it here.</p>;
   return (
     <ol className="flex flex-wrap gap-2" aria-label="Pours">
-      {pours.map((p) => {
+      {[...pours].reverse().map((p) => {
         const worst = Math.max(...p.zones.map((z) => z.dE00 ?? 0));
         return (
           <li key={p.id}>

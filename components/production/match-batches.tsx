@@ -5,12 +5,14 @@ import useSWR from 'swr';
 import { Button } from '@/components/ui/button';
 import type { BatchView } from '@/db/queries/batches';
 import type { MatchDetail } from '@/db/queries/matchDetail';
+import { formatCups, formatDeltaE } from '@/lib/format';
 import { swrFetcher } from '@/lib/http/client';
 import { BatchForm } from './batch-form';
 import { BatchResult } from './batch-result';
 import { PassBadge } from './pass-badge';
 import { RunChart } from './run-chart';
 import { When } from '@/components/ui/when';
+import { FocusFirstField } from '@/components/match/match-sections';
 
 type Props = {
   match: MatchDetail;
@@ -25,24 +27,25 @@ type Props = {
 export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSelect }: Props) {
   const key = `/api/matches/${match.id}/batches`;
   const { data: batches, error, mutate } = useSWR<BatchView[]>(key, swrFetcher);
-  const [logging, setLogging] = useState(false);
+  // "Log a batch" from the Standards or Batches page arrives with ?log=batch.
+  const [logging, setLogging] = useState(() => canLog && match.status !== 'archived' && new URLSearchParams(typeof window === 'undefined' ? '' : window.location.search).get('log') === 'batch');
   const section = useRef<HTMLElement>(null);
   const scrolled = useRef(false);
   const selected = batches?.find((b) => b.id === selectedId) ?? null;
 
-  // Arriving from a failed-batch e-mail (?batch=…): bring the batch into view once.
+  // Arriving from a failed-batch e-mail (?batch=…), or to log one: bring the section into view once.
   useEffect(() => {
-    if (selected && !scrolled.current) {
+    if ((selected || logging) && !scrolled.current) {
       scrolled.current = true;
       section.current?.scrollIntoView({ block: 'start' });
     }
-  }, [selected]);
+  }, [selected, logging]);
 
   if (!match.standardPourId) return null;
   const standardIds = [...new Set([match.standardPourId, ...(batches ?? []).map((b) => b.standardPourId).reverse()])];
 
   return (
-    <section ref={section} aria-labelledby="batches-h" className="space-y-3">
+    <section ref={section} id="batches" aria-labelledby="batches-h" className="scroll-mt-16 space-y-3">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h2 id="batches-h" className="text-lg font-semibold">Production batches</h2>
         {canLog && match.status !== 'archived' && !logging ? <Button onClick={() => setLogging(true)}>Log a batch</Button> : null}
@@ -51,7 +54,7 @@ export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSe
         Each batch is checked against the standard (pour #{match.pours.find((p) => p.id === match.standardPourId)?.number}) within {match.tolerance.toFixed(1)} ΔE00 in every zone.
       </p>
       {logging ? (
-        <div className="rounded-lg border border-panel-line bg-white p-4">
+        <FocusFirstField className="rounded-lg border border-panel-line bg-white p-4">
           <div className="mb-3 flex items-center justify-between gap-2">
             <h3 className="text-lg font-semibold">Log a batch</h3>
             <Button variant="secondary" onClick={() => setLogging(false)}>Cancel</Button>
@@ -66,7 +69,7 @@ export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSe
               onSelect(b.id);
             }}
           />
-        </div>
+        </FocusFirstField>
       ) : null}
       {error ? <p role="alert" className="text-band-off">Could not load the batches: {(error as Error).message}</p> : null}
       {!batches && !error ? <p role="status" className="text-ink-soft">Loading batches…</p> : null}
@@ -92,8 +95,8 @@ export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSe
                 >
                   <PassBadge pass={b.pass} />
                   <span className="num"><When at={b.createdAt} /></span>
-                  <span className="num">{b.cups} cups{b.mold ? ` · ${b.mold}` : ''}</span>
-                  <span className="num">{b.zones.map((z) => `${z.name} ${z.dE00.toFixed(1)} ΔE00`).join(' · ')}</span>
+                  <span className="num">{formatCups(b.cups)}{b.mold ? ` · ${b.mold}` : ''}</span>
+                  <span className="num">{b.zones.map((z) => `${z.name} ${formatDeltaE(z.dE00)} ΔE00`).join(' · ')}</span>
                 </button>
               </li>
             ))}

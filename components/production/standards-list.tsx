@@ -9,7 +9,7 @@ const linkClass = 'inline-flex min-h-tap items-center rounded-md border border-p
 
 // The team's approved colours: per standard, its zones on the grey stage with
 // their Lab, the recipe per cup, the tolerance and how its batches have gone.
-export function StandardsList({ standards }: { standards: StandardView[] }) {
+export function StandardsList({ standards, canLog = false }: { standards: StandardView[]; canLog?: boolean }) {
   if (standards.length === 0) {
     return <p className="rounded-lg border border-panel-line bg-white p-4 text-ink-soft">No standards yet. When a lead approves a submitted pour on its match page, its colour and recipe become the match’s standard and show here.</p>;
   }
@@ -23,6 +23,11 @@ export function StandardsList({ standards }: { standards: StandardView[] }) {
                 <Link href={`/matches/${s.matchId}?pour=${s.standardPourId}`} className="inline-flex min-h-tap items-center underline decoration-panel-line underline-offset-4">{s.name}</Link>
               </h2>
               <StatusBadge status={s.status} />
+              {canLog ? (
+                <Link href={`/matches/${s.matchId}?log=batch#batches`} className={`${linkClass} ml-auto bg-accent text-white`}>
+                  Log a batch<span className="sr-only"> of {s.name}</span>
+                </Link>
+              ) : null}
             </header>
             <p className="text-sm text-ink-soft">
               Standard: pour #{s.standardPourNumber}

@@ -2,7 +2,10 @@ import Link from 'next/link';
 import { db } from '@/db';
 import { listRecentBatches } from '@/db/queries/batches';
 import { RecentBatches } from '@/components/production/recent-batches';
+import { LogBatchPicker } from '@/components/production/log-batch-picker';
+import { listStandards } from '@/db/queries/standards';
 import { requirePageMember } from '@/lib/auth/current';
+import { roleAtLeast } from '@/lib/auth/roles';
 
 export const metadata = { title: 'Batches' };
 
@@ -18,6 +21,7 @@ export default async function BatchesPage() {
           photo and passes when every zone is within the match’s tolerance (ΔE00, CIEDE2000). Bands are rules of thumb for photo work, not a standard.
         </p>
       </div>
+      {roleAtLeast(member.role, 'maker') ? <LogBatchPicker standards={listStandards(db(), member.team.id).map((s) => ({ matchId: s.matchId, name: s.name }))} /> : null}
       <RecentBatches batches={batches} />
     </section>
   );

@@ -2,6 +2,7 @@ import { db } from '@/db';
 import { listStandards } from '@/db/queries/standards';
 import { StandardsList } from '@/components/production/standards-list';
 import { requirePageMember } from '@/lib/auth/current';
+import { roleAtLeast } from '@/lib/auth/roles';
 
 export const metadata = { title: 'Standards' };
 
@@ -17,7 +18,7 @@ export default async function StandardsPage() {
           measured from sRGB), as sampled on the standard pour’s photo; flake and glare left out.
         </p>
       </div>
-      <StandardsList standards={standards} />
+      <StandardsList standards={standards} canLog={roleAtLeast(member.role, 'maker')} />
     </section>
   );
 }
