@@ -113,7 +113,7 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
         </div>
       ) : null}
 
-      <MatchBatches match={match} canLog={canPour} sprueAllowanceMl={production.sprueAllowanceMl} selectedId={params.get('batch')} onSelect={selectBatch} />
+      <MatchBatches match={match} canLog={canPour} sprueAllowanceMl={production.sprueAllowanceMl} selectedId={params.get('batch')} onSelect={selectBatch} startLogging={params.get('log') === 'batch'} />
     </div>
   );
 }

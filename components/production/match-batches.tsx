@@ -20,15 +20,16 @@ type Props = {
   sprueAllowanceMl: number;
   selectedId: string | null;
   onSelect: (batchId: string | null) => void;
+  startLogging?: boolean;
 };
 
 // Production of a match's standard: log a batch, see it pass or fail, the
 // run chart of each standard the match has had, and every batch logged.
-export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSelect }: Props) {
+export function MatchBatches({ match, canLog, sprueAllowanceMl, selectedId, onSelect, startLogging }: Props) {
   const key = `/api/matches/${match.id}/batches`;
   const { data: batches, error, mutate } = useSWR<BatchView[]>(key, swrFetcher);
   // "Log a batch" from the Standards or Batches page arrives with ?log=batch.
-  const [logging, setLogging] = useState(() => canLog && match.status !== 'archived' && new URLSearchParams(typeof window === 'undefined' ? '' : window.location.search).get('log') === 'batch');
+  const [logging, setLogging] = useState(() => Boolean(startLogging) && canLog && match.status !== 'archived');
   const section = useRef<HTMLElement>(null);
   const scrolled = useRef(false);
   const selected = batches?.find((b) => b.id === selectedId) ?? null;
