@@ -12,6 +12,7 @@ import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { swrFetcher } from '@/lib/http/client';
 import { DeltaChart } from './delta-chart';
+import { EditMatch } from './edit-match';
 import { FocusFirstField, JumpBar } from './match-sections';
 import { PourCompare } from './pour-compare';
 import { PourForm } from './pour-form';
@@ -67,6 +68,7 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
         <p className="mt-1 text-ink-soft">
           Zones: {match.zones.join(', ')} · tolerance {match.tolerance.toFixed(1)} ΔE00{match.notes ? ` · ${match.notes}` : ''}
         </p>
+        {canPour && match.status !== 'archived' ? <div className="mt-2"><EditMatch match={match} onSaved={() => void mutate()} /></div> : null}
       </header>
 
       <JumpBar match={match} hasSelection={Boolean(selectedId)} />

@@ -9,7 +9,7 @@ import type { DoseUnit } from '@/db/schema';
 /** A number with at most `digits` decimals and no trailing zeros: 0.125 → "0.125", 2.50 → "2.5". */
 export const trimmed = (n: number, digits = 3) => String(Number(n.toFixed(digits)) + 0);
 
-const DIGITS: Record<DoseUnit, number> = { drops: 1, tsp: 3, g: 2, ml: 2 };
+const DIGITS: Record<DoseUnit, number> = { drops: 2, tsp: 3, g: 2, ml: 2 };
 const ONE: Record<DoseUnit, string> = { drops: 'drop', tsp: 'tsp', g: 'g', ml: 'mL' };
 const MANY: Record<DoseUnit, string> = { drops: 'drops', tsp: 'tsp', g: 'g', ml: 'mL' };
 

@@ -87,3 +87,13 @@ export type TargetInput = z.infer<typeof targetSchema>;
 export type PourInput = z.infer<typeof pourSchema>;
 
 export const draftPhotoSchema = z.object({ photoId: idField });
+
+// What may change on a match after it is created (pours never change).
+export const editMatchSchema = z
+  .object({
+    name: createMatchSchema.shape.name.optional(),
+    notes: z.string().max(4000, 'notes must be at most 4000 characters').nullable().optional(),
+    tolerance: toleranceField.optional(),
+  })
+  .refine((v) => v.name !== undefined || v.notes !== undefined || v.tolerance !== undefined, 'give a name, notes or tolerance to change');
+export type EditMatchInput = z.infer<typeof editMatchSchema>;

@@ -46,7 +46,7 @@ const noSideScroll = (page: Page) => page.evaluate(() => document.documentElemen
 describe.runIf(browserAvailable())('browser: the bench without traps, on a phone and at a desk', () => {
   const browser = useBrowser();
 
-  it('a maker at 390 px: menu, camera, draft reference kept, thumb and keyboard marking, doses as said, no sign-off without a recipe', async () => {
+  it('a maker at 390 px: menu, camera, draft reference kept, thumb and keyboard marking, doses as said, no sign-off without a recipe', { timeout: 240_000 }, async () => {
     const page = await open(browser(), 'maker@demo.test', PHONE, '10.75.0.1');
 
     // 12. The navigation is a menu with the member's name and role; no sideways scroll.
@@ -247,7 +247,7 @@ describe.runIf(browserAvailable())('browser: the bench without traps, on a phone
     expect(queue.some((q) => q.matchId === matchId && q.number === 1)).toBe(true);
   });
 
-  it('the lead finds the waiting pour from the navigation and approves it, at 1280 px and at 390 px', async () => {
+  it('the lead finds the waiting pour from the navigation and approves it, at 1280 px and at 390 px', { timeout: 120_000 }, async () => {
     const desk = await open(browser(), 'lead@demo.test', DESK, '10.75.0.2');
     const maker = await signInAs('maker@demo.test', 'pourproof-demo', '10.75.0.3');
     // A pour of our own, submitted, so the queue holds at least one.

@@ -59,6 +59,7 @@ describe('formatters: one way to write a figure', () => {
     expect(formatDose(1, 'drops')).toBe('1 drop');
     expect(formatDose(6, 'drops')).toBe('6 drops');
     expect(formatDose(2.5, 'drops')).toBe('2.5 drops');
+    expect(formatDose(1.25, 'drops')).toBe('1.25 drops');
     expect(formatDose(0.125, 'tsp')).toBe('0.125 tsp (⅛ tsp)');
     expect(formatDose(0.5, 'tsp')).toBe('0.5 tsp (½ tsp)');
     expect(formatDose(1.25, 'tsp')).toBe('1.25 tsp (1 ¼ tsp)');
