@@ -117,7 +117,11 @@ export function PhotoDropzone({ endpoint, onUploaded, label = 'Add a photo' }: P
         // On a phone this opens the back camera straight away (HTML Media Capture, W3C);
         // elsewhere it is one more way to choose a file.
         <label htmlFor={cameraId} className="flex min-h-tap cursor-pointer items-center justify-center gap-2 rounded-md border border-panel-line bg-white px-4 font-medium focus-within:outline focus-within:outline-3 focus-within:outline-accent hover:bg-panel">
-          <span aria-hidden>📷</span> Take a photo with the camera
+          <svg aria-hidden width="22" height="22" viewBox="0 0 24 24" fill="none" stroke="currentColor" strokeWidth="2" strokeLinejoin="round">
+            <path d="M4 8h3l2-3h6l2 3h3v11H4z" />
+            <circle cx="12" cy="13" r="3.5" />
+          </svg>
+          Take a photo with the camera
           <input
             id={cameraId}
             type="file"
