@@ -11,6 +11,7 @@ import type { MatchDetail } from '@/db/queries/matchDetail';
 import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { swrFetcher } from '@/lib/http/client';
+import { formatDeltaE } from '@/lib/format';
 import { DeltaChart } from './delta-chart';
 import { EditMatch } from './edit-match';
 import { FocusFirstField, JumpBar } from './match-sections';
@@ -66,7 +67,7 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
           {production.canDecide ? <ArchiveControl matchId={match.id} archived={match.status === 'archived'} onDone={() => void mutate()} /> : null}
         </div>
         <p className="mt-1 text-ink-soft">
-          Zones: {match.zones.join(', ')} · tolerance {match.tolerance.toFixed(1)} ΔE00{match.notes ? ` · ${match.notes}` : ''}
+          Zones: {match.zones.join(', ')} · tolerance {formatDeltaE(match.tolerance)} ΔE00{match.notes ? ` · ${match.notes}` : ''}
         </p>
         {canPour && match.status !== 'archived' ? <div className="mt-2"><EditMatch match={match} onSaved={() => void mutate()} /></div> : null}
       </header>

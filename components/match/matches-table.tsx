@@ -17,6 +17,7 @@ import { inputClass } from '@/components/ui/field';
 import type { MatchView } from '@/db/queries/matches';
 import { MATCH_STATUSES } from '@/db/schema';
 import { bandFor } from '@/lib/color/bandFor';
+import { formatDeltaE } from '@/lib/format';
 import { StatusBadge } from './status-badge';
 
 const SORT_ARIA = { asc: 'ascending', desc: 'descending' } as const;
@@ -49,7 +50,7 @@ const columns: ColumnDef<MatchView>[] = [
           {pour.zones.map((z) => (
             <li key={z.name} className="flex flex-wrap items-baseline gap-x-2">
               <span className="w-12 text-ink-soft">{z.name}</span>
-              <span className="num w-8 text-right font-semibold">{z.dE00 === null ? '—' : z.dE00.toFixed(1)}</span>
+              <span className="num w-8 text-right font-semibold">{z.dE00 === null ? '—' : formatDeltaE(z.dE00)}</span>
               {z.dE00 === null ? null : <BandBadge band={bandFor(z.dE00)} className="text-xs" />}
             </li>
           ))}

@@ -7,6 +7,7 @@ import { RegionsOnPhoto } from '@/components/match/regions-on-photo';
 import type { PourView } from '@/db/queries/pours';
 import type { TargetDetail } from '@/db/queries/matchDetail';
 import { swrFetcher } from '@/lib/http/client';
+import { formatCups, formatTemp } from '@/lib/format';
 import { LightNote } from './light-note';
 import { NextPourHint } from './next-pour-hint';
 import { RecipeDiff } from './recipe-diff';
@@ -49,7 +50,7 @@ export function PourCompare({ pourId, previousId, target }: { pourId: string; pr
         <h4 className="mb-1 font-semibold">Recipe{previous ? ` (changes since pour #${previous.number})` : ''}</h4>
         <RecipeDiff current={pour.recipe} previous={previous?.recipe ?? null} />
         <p className="mt-2 text-sm text-ink-soft">
-          {[pour.mold ? `Mold: ${pour.mold}` : null, pour.batchCups ? `${pour.batchCups} cup${pour.batchCups === 1 ? "" : "s"}` : null, pour.tempF ? `${pour.tempF} °F` : null, pour.notes].filter(Boolean).join(' · ')}
+          {[pour.mold ? `Mold: ${pour.mold}` : null, pour.batchCups ? formatCups(pour.batchCups) : null, pour.tempF ? formatTemp(pour.tempF) : null, pour.notes].filter(Boolean).join(' · ')}
         </p>
       </div>
     </section>

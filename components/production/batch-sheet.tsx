@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import { SAFETY_CAUTIONS, TEMPERATURE_CAUTION } from '@/lib/batches/safetyCautions';
-import { formatCups, formatLab, formatMl, formatTemp } from '@/lib/format';
+import { formatCups, formatDeltaE, formatLab, formatMl, formatTemp } from '@/lib/format';
 import { PassBadge } from './pass-badge';
 import { PrintButton } from './print-button';
 import { type Sheet, SheetMolds, SheetRecipe } from './sheet-tables';
@@ -43,7 +43,7 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
           <Item label="Expected yield"><span className="num">{sheet.batch.baitsExpected ?? mold?.baits ?? '—'} baits</span></Item>
           <Item label="Logged"><span className="num"><When at={sheet.batch.createdAt} dayOnly /></span></Item>
           <Item label="QC against the standard"><PassBadge pass={sheet.batch.pass} /></Item>
-          <Item label="Tolerance"><span className="num">{sheet.match.tolerance.toFixed(1)} ΔE00</span></Item>
+          <Item label="Tolerance"><span className="num">{formatDeltaE(sheet.match.tolerance)} ΔE00</span></Item>
           <Item label="Baits counted"><span className="num">{sheet.batch.baits ?? '____'}</span></Item>
         </dl>
       </header>

@@ -3,6 +3,7 @@
 import { useEffect, useRef, useState } from 'react';
 import { useStore } from 'zustand';
 import type { Shape } from '@/lib/color/types';
+import { formatLab } from '@/lib/format';
 import { defaultShape, describeShape, moveShape, resizeShape, shapeFromDrag, shapeLabelPoint, shapePath, toNormalised } from './geometry';
 import { createSamplerStore, NEUTRAL } from './sampler-store';
 import { SamplerToolbar } from './sampler-toolbar';
@@ -160,7 +161,7 @@ export function PhotoSampler({ src, width, height, zones, initialShapes, withNeu
               <span>
                 <span className="block font-medium">{labelOf(zone)}</span>
                 <span className="num block text-ink-soft">
-                  {p ? `preview L* ${p.lab.l.toFixed(1)} a* ${p.lab.a.toFixed(1)} b* ${p.lab.b.toFixed(1)}` : 'not marked yet'}
+                  {p ? `preview ${formatLab(p.lab)}` : 'not marked yet'}
                 </span>
               </span>
             </li>
