@@ -20,14 +20,14 @@ export function EditMatch({ match, onSaved }: { match: MatchDetail; onSaved: () 
   const [open, setOpen] = useState(false);
   const { data: edits, mutate } = useSWR<MatchEdit[]>(`/api/matches/${match.id}/edits`, swrFetcher);
   return (
-    <div className="space-y-2">
+    <div className={open ? 'w-full space-y-2' : 'contents'}>
       {open ? (
         <EditForm match={match} onClose={() => setOpen(false)} onSaved={() => { setOpen(false); void mutate(); onSaved(); }} />
       ) : (
-        <Button variant="secondary" onClick={() => setOpen(true)}>Edit name, notes or tolerance</Button>
+        <Button variant="secondary" onClick={() => setOpen(true)} aria-label="Edit name, notes or tolerance">Edit</Button>
       )}
       {edits && edits.length ? (
-        <details className="text-sm">
+        <details className="basis-full text-sm">
           <summary className="min-h-tap cursor-pointer py-2 font-medium">Changes to this match ({edits.length})</summary>
           <ol aria-label="Changes to this match" className="space-y-1">
             {edits.map((e, i) => (

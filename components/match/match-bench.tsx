@@ -65,11 +65,11 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
           <h1 className="text-2xl font-semibold">{match.name}</h1>
           <StatusBadge status={match.status} />
           {production.canDecide ? <ArchiveControl matchId={match.id} archived={match.status === 'archived'} onDone={() => void mutate()} /> : null}
+          {canPour && match.status !== 'archived' ? <EditMatch match={match} onSaved={() => void mutate()} /> : null}
         </div>
         <p className="mt-1 text-ink-soft">
           Zones: {match.zones.join(', ')} · tolerance {formatDeltaE(match.tolerance)} ΔE00{match.notes ? ` · ${match.notes}` : ''}
         </p>
-        {canPour && match.status !== 'archived' ? <div className="mt-2"><EditMatch match={match} onSaved={() => void mutate()} /></div> : null}
       </header>
 
       <JumpBar match={match} hasSelection={Boolean(selectedId)} />

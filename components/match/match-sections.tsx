@@ -4,8 +4,10 @@ import { type ReactNode, useRef } from 'react';
 import { useFocusFirstField } from '@/components/ui/use-focus-first-field';
 import type { MatchDetail } from '@/db/queries/matchDetail';
 
-// The match page on a phone is long: a bar of in-page links, kept in view,
-// jumps to each part of it (target, pours, compare, sign-off, batches).
+// The match page on a phone is long: a bar of in-page links jumps to each part
+// of it (target, pours, compare, sign-off, batches). It is not sticky: a bar
+// floating over the sampler would catch the thumb that draws a zone.
+// A new match has only its target, so it gets no bar.
 export function JumpBar({ match, hasSelection }: { match: MatchDetail; hasSelection: boolean }) {
   const parts = [
     { id: 'target', label: 'Target', show: true },
@@ -14,8 +16,9 @@ export function JumpBar({ match, hasSelection }: { match: MatchDetail; hasSelect
     { id: 'signoff', label: 'Sign-off', show: Boolean(match.target) && hasSelection },
     { id: 'batches', label: 'Batches', show: Boolean(match.standardPourId) },
   ].filter((p) => p.show);
+  if (parts.length < 2) return null;
   return (
-    <nav aria-label="On this page" className="sticky top-0 z-20 -mx-4 border-b border-panel-line bg-panel/95 px-4 py-1 backdrop-blur">
+    <nav aria-label="On this page" className="-mx-4 border-y border-panel-line px-4">
       <ul className="flex gap-1 overflow-x-auto">
         {parts.map((p) => (
           <li key={p.id}>
