@@ -1,6 +1,6 @@
 import path from 'node:path';
+import { buildApp } from '../scripts/build-app';
 import { buildIsStale } from '../scripts/build-stale';
-import { run } from '../scripts/run';
 import { runDeltaELoad } from './delta-e-load';
 import { runMeasureBench } from './measure';
 
@@ -17,7 +17,7 @@ async function main() {
 
   if (buildIsStale(root)) {
     console.log('\n== building the app for the load test');
-    const code = await run(path.join(root, 'node_modules/.bin/next'), ['build']);
+    const code = await buildApp(root, '.next');
     if (code !== 0) process.exit(code);
   }
   console.log('\n== POST /api/delta-e under load (autocannon, 10 s, 32 connections, next start)');
@@ -26,6 +26,10 @@ async function main() {
   console.log(`  latency p50 ${l.p50} ms · p97.5 ${l.p975} ms · p99 ${l.p99} ms`);
   console.log('\n== /api/measure refusing bad photos (slowest of 3; target well under 2 s)');
   for (const r of l.refusals) console.log(`  ${r.label}: ${r.status} in ${r.ms.toFixed(0)} ms`);
+  const h = l.health;
+  console.log('\n== /api/health while six heavy measurements run (20 MP JPEG, 16 outlines each, three members × two)');
+  console.log(`  measurements answered ${h.statuses.join(', ')} in ${h.measureMs.toFixed(0)} ms`);
+  console.log(`  health: ${h.healthCount} answers, p50 ${h.healthP50.toFixed(1)} ms, p95 ${h.healthP95.toFixed(1)} ms, max ${h.healthMax.toFixed(1)} ms (goal: every answer ≤ 100 ms)`);
 }
 
 main().catch((err) => {

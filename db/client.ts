@@ -1,3 +1,4 @@
+import { env } from '@/lib/env';
 import { openDatabase, type DB } from './open';
 
 // The one database client of the app process, kept on globalThis so every
@@ -6,7 +7,7 @@ const globalForDb = globalThis as unknown as { pourproofDb?: DB };
 
 export function getDb(): DB {
   if (!globalForDb.pourproofDb) {
-    globalForDb.pourproofDb = openDatabase(process.env.DATABASE_URL ?? './data/pourproof.db', { migrate: true });
+    globalForDb.pourproofDb = openDatabase(env().DATABASE_URL, { migrate: true });
   }
   return globalForDb.pourproofDb;
 }

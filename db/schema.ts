@@ -338,7 +338,7 @@ export const outgoingMail = sqliteTable(
     subject: text('subject').notNull(),
     text: text('text_body').notNull(),
     html: text('html_body'),
-    status: text('status', { enum: ['queued', 'sent', 'failed'] }).notNull().default('queued'),
+    status: text('status', { enum: ['queued', 'sending', 'sent', 'failed'] }).notNull().default('queued'),
     attempts: integer('attempts').notNull().default(0),
     lastError: text('last_error'),
     nextAttemptAt: integer('next_attempt_at').notNull().default(now),

@@ -56,6 +56,7 @@ function startSmtp(store: MailStore, port: number, log: (line: string) => void):
             subject: parsed.subject ?? '',
             text: parsed.text ?? '',
             html: typeof parsed.html === 'string' ? parsed.html : null,
+            messageId: parsed.messageId ? parsed.messageId.replace(/^<|>$/g, '') : null,
           });
           log(`[mail-fake] message to ${stored.to.join(', ')}: ${stored.subject}`);
           callback();

@@ -10,6 +10,8 @@ export type StoredMessage = {
   subject: string;
   text: string;
   html: string | null;
+  // The Message-ID header the sender set (without angle brackets), or null.
+  messageId: string | null;
   at: string;
 };
 

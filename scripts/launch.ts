@@ -5,8 +5,8 @@ import { demoTeamId, seedDemo } from '../db/seed-demo';
 import { seedDemoPours } from '../db/seed-demo-pours';
 import { settleMail } from '../lib/mail/queue';
 import { seedDemoStandard } from '../db/seed-demo-standard';
+import { buildApp } from './build-app';
 import { buildIsStale } from './build-stale';
-import { run } from './run';
 import { startStandIns } from './standins';
 
 // One launcher for `npm run demo` (production build) and `npm run dev`:
@@ -33,7 +33,7 @@ async function main() {
 
   if (mode === 'demo' && buildIsStale(root)) {
     console.log('[launch] no build of the current sources yet: building once');
-    const code = await run(path.join(root, 'node_modules/.bin/next'), ['build']);
+    const code = await buildApp(root, '.next');
     if (code !== 0) {
       await standIns.close();
       process.exit(code);

@@ -24,6 +24,7 @@ export async function startStandIns(opts: { dataDir: string; ephemeralPorts?: bo
   const env: Record<string, string> = {
     SMTP_URL: `smtp://127.0.0.1:${mail.smtpPort}`,
     MAIL_FAKE_URL: mail.httpUrl,
+    UPLOADS_FAKE_DIR: path.resolve(opts.dataDir, 'uploads'),
     ...uploadsFakeEnv(uploads.url),
   };
   return {

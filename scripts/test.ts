@@ -1,5 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
+import { buildApp } from './build-app';
 import { run } from './run';
 
 // The whole suite: type check, a production build of the app for the
@@ -18,7 +19,12 @@ async function main() {
     }
   };
   await step('type check', bin('tsc'), ['--noEmit', '-p', root]);
-  await step('build (for the integration and browser tests)', bin('next'), ['build'], { NEXT_DIST_DIR: process.env.POURPROOF_TEST_DIST ?? '.next-test' });
+  console.log('\n== build (for the integration and browser tests)');
+  const built = await buildApp(root, process.env.POURPROOF_TEST_DIST ?? '.next-test');
+  if (built !== 0) {
+    console.error(`\nbuild failed (exit ${built})`);
+    process.exit(built);
+  }
   const report = path.join(root, 'test-results', 'vitest.json');
   fs.rmSync(report, { force: true });
   console.log('\n== tests');

@@ -14,8 +14,8 @@ export default async function BenchLayout({ children }: { children: React.ReactN
         Skip to content
       </a>
       <div className="min-h-screen">
-      <AppNav member={{ name: member.user.name, role: member.role, team: member.team.name }} devTools={env().POURPROOF_DEV_TOOLS === '1' && Boolean(env().MAIL_FAKE_URL)} />
-      <main id="main" tabIndex={-1} className="mx-auto max-w-7xl px-4 py-6 focus:outline-none">{children}</main>
+        <AppNav member={{ name: member.user.name, role: member.role, team: member.team.name }} devTools={member.role === 'owner' && env().POURPROOF_DEV_TOOLS === '1' && Boolean(env().MAIL_FAKE_URL)} />
+        <main id="main" tabIndex={-1} className="mx-auto max-w-7xl px-4 py-6 focus:outline-none">{children}</main>
       </div>
     </ShopTimeZoneProvider>
   );

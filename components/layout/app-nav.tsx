@@ -26,14 +26,16 @@ export function AppNav({ member, devTools = false }: { member: Member; devTools?
   const pathname = usePathname();
   const router = useRouter();
   const [busy, setBusy] = useState(false);
-  const [open, setOpen] = useState(false);
+  // The menu is open on the page it was opened on: navigating closes it.
+  const [openOn, setOpenOn] = useState<string | null>(null);
+  const open = openOn === pathname;
+  const setOpen = (v: boolean) => setOpenOn(v ? pathname : null);
   const menuId = useId();
   const decides = member.role === 'lead' || member.role === 'owner';
   const waiting = useSignOffQueue(decides).data?.length ?? 0;
-  useEffect(() => setOpen(false), [pathname]);
   useEffect(() => {
     if (!open) return;
-    const onKey = (e: KeyboardEvent) => e.key === 'Escape' && setOpen(false);
+    const onKey = (e: KeyboardEvent) => e.key === 'Escape' && setOpenOn(null);
     window.addEventListener('keydown', onKey);
     return () => window.removeEventListener('keydown', onKey);
   }, [open]);

@@ -54,7 +54,6 @@ export function NewMatchForm({ defaultTolerance, onDone }: { defaultTolerance: n
       <FormError message={error} />
       <Field label="Name" error={err.name?.message} hint="What the colour is called in the shop, e.g. “Dusk crawdad”.">
         {/* The form has just opened at the maker's request: start typing the name. */}
-        {/* eslint-disable-next-line jsx-a11y/no-autofocus */}
         <TextInput autoFocus {...register('name')} />
       </Field>
       <fieldset>

@@ -28,8 +28,11 @@ function readMarks(matchId: string, photoId: string): Record<string, Shape> | un
 // at once as a draft (POST …/draft-photo), so it survives a reload.
 export function TargetSampling({ match, onSaved }: { match: MatchDetail; onSaved: () => void }) {
   const [photo, setPhoto] = useState<Pick<UploadedPhoto, 'photoId' | 'width' | 'height'> | null>(match.draft);
-  const [initial, setInitial] = useState<Record<string, Shape> | undefined>(undefined);
-  const [ready, setReady] = useState(false);
+  // This renders only in the browser (the match comes from SWR), so the marks
+  // kept in localStorage can be read as the state starts.
+  const [initial, setInitial] = useState<Record<string, Shape> | undefined>(() =>
+    match.draft && typeof window !== 'undefined' ? readMarks(match.id, match.draft.photoId) : undefined,
+  );
   const [shapes, setShapes] = useState<Record<string, Shape>>({});
   const [cardL, setCardL] = useState('');
   const [error, setError] = useState<string | null>(null);
@@ -37,21 +40,17 @@ export function TargetSampling({ match, onSaved }: { match: MatchDetail; onSaved
   const onChange = useCallback((s: Record<string, Shape>) => setShapes(s), []);
   const missing = match.zones.filter((z) => !shapes[z]);
 
-  // Marks come from localStorage, which only the browser has: read after mount.
   useEffect(() => {
-    if (photo) setInitial(readMarks(match.id, photo.photoId));
-    setReady(true);
-  }, [match.id, photo]);
-  useEffect(() => {
-    if (!photo || !ready) return;
+    if (!photo) return;
     try {
       window.localStorage.setItem(marksKey(match.id, photo.photoId), JSON.stringify(shapes));
     } catch {
       // Private browsing or a full store: the marks just are not kept.
     }
-  }, [match.id, photo, ready, shapes]);
+  }, [match.id, photo, shapes]);
 
   async function attach(p: UploadedPhoto) {
+    setInitial(undefined);
     setPhoto(p);
     setError(null);
     try {
@@ -106,9 +105,7 @@ export function TargetSampling({ match, onSaved }: { match: MatchDetail; onSaved
   return (
     <div className="space-y-3">
       <p className="text-sm">Pick a zone, then drag over it on the photo. Mark the grey card too, if there is one. This photo is kept with the match until you save the target.</p>
-      {ready ? (
-        <PhotoSampler key={photo.photoId} src={`/api/photos/${photo.photoId}/image`} width={photo.width} height={photo.height} zones={match.zones} initialShapes={initial} withNeutral onChange={onChange} />
-      ) : null}
+      <PhotoSampler key={photo.photoId} src={`/api/photos/${photo.photoId}/image`} width={photo.width} height={photo.height} zones={match.zones} initialShapes={initial} withNeutral onChange={onChange} />
       {shapes[NEUTRAL] ? (
         <Field label="Grey card's nominal L* (optional)" hint="Leave empty to correct colour cast only; give it (e.g. 50 for an 18 % grey card) to correct exposure too.">
           <input type="number" min="1" max="100" step="0.1" value={cardL} onChange={(e) => setCardL(e.target.value)} className={inputClass} />

@@ -3,7 +3,7 @@ import { cookies } from 'next/headers';
 import { redirect } from 'next/navigation';
 import { cache } from 'react';
 import { db } from '@/db';
-import { getMemberByUserId, type Member } from '@/db/queries/members';
+import type { Member } from '@/db/queries/members';
 import type { Role } from '@/db/schema';
 import { ApiError } from '@/lib/http/api';
 import { SESSION_COOKIE } from './lucia';
@@ -17,8 +17,8 @@ export const getCurrentMember = cache(async (): Promise<Member | null> => {
   const jar = await cookies();
   const token = jar.get(SESSION_COOKIE)?.value;
   if (!token) return null;
-  const { user, fresh } = await validateSessionToken(db(), token);
-  if (!user) return null;
+  const { member, fresh } = await validateSessionToken(db(), token);
+  if (!member) return null;
   if (fresh) {
     // Lucia slid the session's expiry forward: move the cookie's with it.
     // Server components may not set cookies; the next action or API call will.
@@ -29,7 +29,7 @@ export const getCurrentMember = cache(async (): Promise<Member | null> => {
       /* read-only cookies in a server component */
     }
   }
-  return getMemberByUserId(db(), user.id);
+  return member;
 });
 
 // The one gate of every route handler and server action: 401 when signed

@@ -1,28 +1,47 @@
 import 'server-only';
 import { env } from '@/lib/env';
 import { ApiError } from './api';
+import { PEER_HEADER } from './peerHeader';
+import { originRefusal } from './sameOrigin';
 
-// Mutating route handlers accept only requests whose Origin is this app
-// (Next checks server actions itself, not route handlers). A missing Origin
-// is refused too: outside callers send `Origin: <the app's URL>`.
-export function assertSameOrigin(req: Request) {
-  const origin = req.headers.get('origin');
-  if (!origin) throw new ApiError(403, 'bad_origin', 'Missing Origin header; send Origin: <this app\'s URL>');
-  const allowed = new Set<string>();
-  const host = req.headers.get('x-forwarded-host') ?? req.headers.get('host');
-  if (host) {
-    allowed.add(`http://${host}`);
-    allowed.add(`https://${host}`);
-  }
-  const configured = env().APP_URL;
-  if (configured) allowed.add(new URL(configured).origin);
-  if (!allowed.has(origin)) throw new ApiError(403, 'bad_origin', `Requests from ${origin.slice(0, 100)} are not accepted`);
+// Forwarded headers are believed only when TRUST_PROXY_HOPS says the app sits
+// behind that many proxies (lib/env.ts); otherwise a client could write any
+// address or host there.
+
+/**
+ * Refuses (403) a request whose Origin is missing or not this app's. Mutating
+ * route handlers and server actions call it first (Next checks a server
+ * action's Origin only when the browser sends one). Outside callers send
+ * `Origin: <the app's URL>`.
+ */
+export function assertSameOriginHeaders(headers: Headers) {
+  const refusal = originRefusal(headers);
+  if (refusal) throw new ApiError(403, 'bad_origin', refusal);
 }
 
-// The client address for throttling: the first hop of X-Forwarded-For, which
-// Next's server fills from the socket when no proxy set it.
+export function assertSameOrigin(req: Request) {
+  assertSameOriginHeaders(req.headers);
+}
+
+/**
+ * The client's address for throttling: the socket's peer (set by the server,
+ * never by the client: lib/http/peerHeader.ts), or with TRUST_PROXY_HOPS = n the
+ * n-th entry from the right of X-Forwarded-For, which the outermost trusted
+ * proxy wrote.
+ */
+export function clientIpFrom(headers: Headers): string | null {
+  const hops = env().TRUST_PROXY_HOPS;
+  if (hops > 0) {
+    const chain = (headers.get('x-forwarded-for') ?? '')
+      .split(',')
+      .map((s) => s.trim())
+      .filter(Boolean);
+    const ip = chain[Math.max(0, chain.length - hops)];
+    if (ip) return ip.slice(0, 64);
+  }
+  return headers.get(PEER_HEADER)?.slice(0, 64) || null;
+}
+
 export function clientIp(req: Request): string | null {
-  const xff = req.headers.get('x-forwarded-for');
-  if (xff) return xff.split(',')[0]!.trim().slice(0, 64) || null;
-  return req.headers.get('x-real-ip');
+  return clientIpFrom(req.headers);
 }

@@ -1,6 +1,7 @@
 export type ImageErrorKind =
   | 'too_large' // file over MAX_IMAGE_BYTES → 413
   | 'too_many_pixels' // header says more than MAX_IMAGE_PIXELS → 413
+  | 'too_much_work' // the regions' outlines ask for more than MAX_MEASURE_WORK → 413
   | 'unsupported_type' // not a decodable JPEG, PNG or WebP (HEIC, SVG, text, truncated…) → 415
   | 'corrupt' // decoded, but the pixels came out inconsistent → 415
   | 'empty_region' // a region (or the neutral patch) covers no pixel centre → 422
@@ -10,6 +11,7 @@ export type ImageErrorKind =
 export const IMAGE_ERROR_STATUS: Record<ImageErrorKind, number> = {
   too_large: 413,
   too_many_pixels: 413,
+  too_much_work: 413,
   unsupported_type: 415,
   corrupt: 415,
   empty_region: 422,

@@ -10,3 +10,4 @@ export {
   type PhotoMeasure,
   type PhotoRegion,
 } from './measurePhoto';
+export { assertWorkBudget, MAX_MEASURE_WORK } from './workBudget';

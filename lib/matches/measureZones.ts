@@ -3,7 +3,8 @@ import type { DB } from '@/db/open';
 import { photos } from '@/db/schema';
 import type { Shape } from '@/lib/color';
 import { ApiError } from '@/lib/http/api';
-import { ImageError, measurePhoto, type NeutralPatch, type PhotoMeasure } from '@/lib/image';
+import { ImageError, type NeutralPatch, type PhotoMeasure } from '@/lib/image';
+import { measureOffThread } from '@/lib/image/measurePool';
 import { fetchStoredBytes } from '@/lib/uploads/service';
 
 // Measures named zones on one of the team's stored photos. A photo of another
@@ -20,7 +21,7 @@ export async function measureZones(
   if (!photo) throw new ApiError(404, 'not_found', 'photoId: no such photo in your team');
   const bytes = await fetchStoredBytes(photo.fileKey);
   try {
-    return await measurePhoto(bytes, zones, neutral);
+    return await measureOffThread(bytes, zones, neutral);
   } catch (err) {
     if (err instanceof ImageError) throw new ApiError(err.status, err.kind, err.message);
     throw err;

@@ -23,7 +23,6 @@ export async function createInvitation(database: DB, owner: Member, input: { ema
     recordAudit(tx, { teamId: owner.team.id, actorId: owner.user.id, action: 'invitation.created', entity: 'invitation', entityId: id, data: { email: input.email, role: input.role } });
   });
   const link = `${baseUrl}/invite/${token}`;
-  console.info(`[team] invitation for ${input.email} (${input.role}) to ${owner.team.name}: ${link}`);
   const mail = invitationMail({ teamName: owner.team.name, inviterName: owner.user.name, role: input.role, link });
   queueMail(database, { teamId: owner.team.id, to: input.email, ...mail });
   return { id, email: input.email, role: input.role, link };

@@ -4,19 +4,19 @@ import { getMemberByUserId, type Member } from '@/db/queries/members';
 import { users } from '@/db/schema';
 import { dummyHash, verifyPassword } from '@/lib/auth/password';
 import { createUserSession } from '@/lib/auth/session';
-import { clearFailures, recordFailure, retryAfterSeconds, throttleKeys } from '@/lib/auth/throttle';
+import { clearPairFailures, recordFailure, retryAfterSeconds, throttleKeys } from '@/lib/auth/throttle';
 import { ApiError } from '@/lib/http/api';
 import type { SignInInput } from '@/lib/validations/auth';
 
 const WRONG = 'E-mail or password is wrong';
 
-// Checks the password (argon2id), with per-account and per-address
-// throttling, and one message for unknown e-mail and wrong password alike.
+// Checks the password (argon2id), throttled per account and address
+// (lib/auth/throttle.ts), and one message for unknown e-mail and wrong password alike.
 export async function signIn(database: DB, input: SignInInput, ip: string | null): Promise<{ member: Member; token: string }> {
   const keys = throttleKeys(input.email, ip);
   const wait = retryAfterSeconds(database, keys);
   if (wait > 0) {
-    throw new ApiError(429, 'too_many_attempts', `Too many failed sign-ins; try again in ${Math.ceil(wait / 60)} min`, {
+    throw new ApiError(429, 'too_many_attempts', `Too many failed sign-ins; try again in ${wait < 90 ? `${wait} s` : `${Math.ceil(wait / 60)} min`}`, {
       'Retry-After': String(wait),
     });
   }
@@ -27,7 +27,7 @@ export async function signIn(database: DB, input: SignInInput, ip: string | null
     recordFailure(database, keys);
     throw new ApiError(401, 'invalid_credentials', WRONG);
   }
-  clearFailures(database, keys.slice(0, 1));
+  clearPairFailures(database, keys);
   const { token } = await createUserSession(database, member.user.id);
   return { member, token };
 }

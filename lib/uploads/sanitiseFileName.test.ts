@@ -24,4 +24,9 @@ describe('sanitiseFileName', () => {
     expect(long).toHaveLength(120);
     expect(long.endsWith('.png')).toBe(true);
   });
+
+  it('drops invisible format characters, so a right-to-left override cannot disguise the extension (Unicode category Cf)', () => {
+    expect(sanitiseFileName('bait\u202egnp.exe.png', 'png')).toBe('baitgnp.exe.png');
+    expect(sanitiseFileName('a\u200bb\u2066c.jpg', 'jpeg')).toBe('abc.jpg');
+  });
 });

@@ -5,7 +5,8 @@ const MAX_NAME = 120;
 /**
  * A client's file name is kept only as a display name: path parts are dropped
  * (`../../etc/passwd.png` → `passwd.png`, `C:\\a\\b.jpg` → `b.jpg`), control and
- * quote characters replaced, length capped, and the extension made to match the
+ * quote characters replaced, invisible format characters (bidi overrides)
+ * dropped, length capped, and the extension made to match the
  * format the bytes really are.
  */
 export function sanitiseFileName(name: string | null | undefined, format: PhotoFormat): string {
@@ -13,6 +14,9 @@ export function sanitiseFileName(name: string | null | undefined, format: PhotoF
   let base = last
     .normalize('NFC')
     .replace(/[\u0000-\u001f\u007f"<>|:*?]/g, '_')
+    // Invisible format characters, the bidirectional overrides among them
+    // (U+202E shows "gnp.exe" as "exe.png"): Unicode general category Cf.
+    .replace(/\p{Cf}/gu, '')
     .replace(/^[.\s]+/, '')
     .trim();
   const ext = PHOTO_FORMATS[format].ext;

@@ -55,19 +55,40 @@ describe('sign-up, sign-in, sign-out over HTTP', () => {
     expectErrorShape(after.body);
   });
 
-  it('throttles failed sign-ins per account: the 11th attempt in 15 minutes is 429 with Retry-After', async () => {
+  it('slows a guessed account down without locking its member out (OWASP Authentication Cheat Sheet, account lockout)', async () => {
     const shop = await signUpShop();
     for (let i = 0; i < 10; i++) {
-      // A different address each time, so only the per-account limit applies.
+      // A different address each time: a distributed guesser.
       const r = await api('/api/auth/sign-in', { body: { email: shop.email, password: `wrong ${i}` }, headers: { 'x-forwarded-for': `10.20.${i}.1` } });
       expect(r.status).toBe(401);
     }
-    const blocked = await api('/api/auth/sign-in', { body: { email: shop.email, password: shop.password }, headers: { 'x-forwarded-for': '10.20.99.1' } });
-    expect(blocked.status).toBe(429);
-    expectErrorShape(blocked.body);
-    const retry = Number(blocked.headers.get('retry-after'));
+    // The account is under attack: an address that has failed on it must wait…
+    const again = await api('/api/auth/sign-in', { body: { email: shop.email, password: 'wrong again' }, headers: { 'x-forwarded-for': '10.20.3.1' } });
+    expect(again.status).toBe(429);
+    expectErrorShape(again.body);
+    const retry = Number(again.headers.get('retry-after'));
     expect(retry).toBeGreaterThan(0);
     expect(retry).toBeLessThanOrEqual(15 * 60);
+    // …even with the right password (it cannot tell the member from the guesser there)…
+    const sameAddress = await api('/api/auth/sign-in', { body: { email: shop.email, password: shop.password }, headers: { 'x-forwarded-for': '10.20.3.1' } });
+    expect(sameAddress.status).toBe(429);
+    // …while the member, from an address that has not been failing, signs in.
+    const member = await api('/api/auth/sign-in', { body: { email: shop.email, password: shop.password }, headers: { 'x-forwarded-for': '10.20.99.1' } });
+    expect(member.status).toBe(200);
+  });
+
+  it('slows one address down after five wrong passwords for one account, with a growing wait', async () => {
+    const shop = await signUpShop();
+    const ip = '10.21.0.9';
+    for (let i = 0; i < 5; i++) {
+      const r = await api('/api/auth/sign-in', { body: { email: shop.email, password: `wrong ${i}` }, headers: { 'x-forwarded-for': ip } });
+      expect(r.status).toBe(401);
+    }
+    const slowed = await api('/api/auth/sign-in', { body: { email: shop.email, password: shop.password }, headers: { 'x-forwarded-for': ip } });
+    expect(slowed.status).toBe(429);
+    expect(Number(slowed.headers.get('retry-after'))).toBeLessThanOrEqual(30);
+    const elsewhere = await api('/api/auth/sign-in', { body: { email: shop.email, password: shop.password }, headers: { 'x-forwarded-for': '10.21.0.10' } });
+    expect(elsewhere.status).toBe(200);
   });
 
   it('throttles failed sign-ins per address across accounts', async () => {

@@ -7,7 +7,7 @@ import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { outgoingMail } from '../../db/schema';
 import { type MailFake, startMailFake } from '../../mail-fake/server';
 import { resetEnvForTests } from '../../lib/env';
-import { deliverDue } from '../../lib/mail/queue';
+import { deliverDue, deliverOne } from '../../lib/mail/queue';
 import { createInvitation } from '../../lib/team/invitations';
 import { signUp } from '../../lib/team/signUp';
 import { freshDb } from '../support/db';
@@ -71,5 +71,19 @@ describe('e-mail while the SMTP server is unreachable', () => {
     expect(list).toHaveLength(1);
     expect(list[0].subject).toBe("You're invited to Retry shop on Pourproof");
     expect(list[0].text).toContain(inv.link);
+  });
+
+  it('sends a message once when two passes reach it at the same time (the row is claimed before sending)', async () => {
+    fake = await startMailFake({ smtpPort: 0, httpPort: 0, dataDir: dir, log: () => {} });
+    await fetch(`${fake.url}/messages`, { method: 'DELETE' });
+    process.env.SMTP_URL = `smtp://127.0.0.1:${fake.smtpPort}`;
+    resetEnvForTests();
+    const id = 'race-row-1';
+    db.database.insert(outgoingMail).values({ id, teamId: null, to: 'race@retry.test', subject: 'Once', text: 'Sent once.', nextAttemptAt: Date.now() }).run();
+    const results = await Promise.all([deliverDue(db.database), deliverDue(db.database), deliverOne(db.database, id)]);
+    expect(results.map(Number).reduce((a, b) => a + b, 0)).toBe(1);
+    const list = (await (await fetch(`${fake.url}/messages?to=race@retry.test`)).json()) as unknown[];
+    expect(list).toHaveLength(1);
+    expect(db.database.select().from(outgoingMail).where(eq(outgoingMail.id, id)).get()).toMatchObject({ status: 'sent', attempts: 1 });
   });
 });

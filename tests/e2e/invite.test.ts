@@ -1,5 +1,5 @@
 import { describe, expect, inject, it } from 'vitest';
-import { artifactPath, browserAvailable, useBrowser } from '../support/browser';
+import { artifactPath, browserAvailable, signedInPage, useBrowser } from '../support/browser';
 import { DEMO_TEAM } from '../../db/seed-demo';
 import { api, baseUrl, signInAs, uniqueEmail } from '../support/http';
 
@@ -57,12 +57,15 @@ describe.runIf(browserAvailable())('browser: accept an e-mailed invitation', () 
     expect(me.status).toBe(200);
     expect(me.body).toMatchObject({ user: { email, name: 'Invited Lead' }, role: 'lead' });
 
-    // The mailbox page lists the message with its link clickable.
-    await page.goto(`${baseUrl()}/dev/mailbox`);
-    const linkOnPage = page.getByRole('link', { name: link! });
+    await context.close();
+
+    // The mailbox page shows the shop's owner the message with its link clickable.
+    const ownerPage = await signedInPage(browser(), baseUrl(), 'owner@demo.test', { width: 390, height: 844 });
+    await ownerPage.goto(`${baseUrl()}/dev/mailbox`);
+    const linkOnPage = ownerPage.getByRole('link', { name: link! });
     await linkOnPage.first().waitFor();
     expect(await linkOnPage.first().getAttribute('href')).toBe(link);
-    await page.screenshot({ path: artifactPath('mailbox-390.png'), fullPage: true });
-    await context.close();
+    await ownerPage.screenshot({ path: artifactPath('mailbox-390.png'), fullPage: true });
+    await ownerPage.context().close();
   });
 });

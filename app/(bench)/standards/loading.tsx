@@ -1,1 +1,1 @@
-export { default } from '../loading';
+export { PageLoading as default } from '@/components/layout/page-loading';

@@ -75,6 +75,18 @@ export default async function TeamPage() {
           <SettingsForm settings={getTeamSettings(db(), member.team.id)!} timeZones={timeZoneList()} action={saveTeamSettings} />
         </div>
       ) : null}
+      {isOwner ? (
+        <div className="rounded-lg border border-panel-line bg-white p-4">
+          <h2 className="text-lg font-semibold">Your shop's data</h2>
+          <p className="mt-1 text-sm text-ink-soft">
+            Everything the shop keeps in Pourproof — members, colorants, molds, matches, pours with their recipes and colours, sign-offs, standards,
+            batches and links to every photo — as one JSON file you can keep or take elsewhere.
+          </p>
+          <a href="/api/team/export" download className="mt-3 inline-flex min-h-tap items-center rounded-md border border-panel-line bg-white px-4 font-medium hover:bg-panel">
+            Download everything (JSON)
+          </a>
+        </div>
+      ) : null}
     </section>
   );
 }

@@ -5,23 +5,25 @@ import { revalidatePath } from 'next/cache';
 import { db } from '@/db';
 import { teams } from '@/db/schema';
 import { recordAudit } from '@/lib/audit';
-import { requireRole } from '@/lib/auth/current';
+import { guardedAction } from '@/lib/http/action';
 import { teamSettingsSchema } from '@/lib/validations/team';
 
 export type SettingsState = { ok: boolean; message?: string; fieldErrors?: Record<string, string> } | null;
 
 export async function saveTeamSettings(_prev: SettingsState, form: FormData): Promise<SettingsState> {
-  const owner = await requireRole('owner');
-  const parsed = teamSettingsSchema.safeParse(Object.fromEntries(form));
-  if (!parsed.success) {
-    const fieldErrors: Record<string, string> = {};
-    for (const i of parsed.error.issues) fieldErrors[String(i.path[0])] ??= i.message;
-    return { ok: false, fieldErrors };
-  }
-  db().transaction((tx) => {
-    tx.update(teams).set(parsed.data).where(eq(teams.id, owner.team.id)).run();
-    recordAudit(tx, { teamId: owner.team.id, actorId: owner.user.id, action: 'team.settings_changed', entity: 'team', entityId: owner.team.id, data: parsed.data });
+  return guardedAction('owner', async ({ member }) => {
+    const owner = member!;
+    const parsed = teamSettingsSchema.safeParse(Object.fromEntries(form));
+    if (!parsed.success) {
+      const fieldErrors: Record<string, string> = {};
+      for (const i of parsed.error.issues) fieldErrors[String(i.path[0])] ??= i.message;
+      return { ok: false, fieldErrors };
+    }
+    db().transaction((tx) => {
+      tx.update(teams).set(parsed.data).where(eq(teams.id, owner.team.id)).run();
+      recordAudit(tx, { teamId: owner.team.id, actorId: owner.user.id, action: 'team.settings_changed', entity: 'team', entityId: owner.team.id, data: parsed.data });
+    });
+    revalidatePath('/team');
+    return { ok: true, message: 'Settings saved.' };
   });
-  revalidatePath('/team');
-  return { ok: true, message: 'Settings saved.' };
 }

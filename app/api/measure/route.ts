@@ -3,7 +3,9 @@ import { requireMember } from '@/lib/auth/current';
 import { ApiError, badRequest, describeZodErrorAt, json, withApi } from '@/lib/http/api';
 import { formFile, readMultipart } from '@/lib/http/multipart';
 import { assertSameOrigin } from '@/lib/http/origin';
-import { ImageError, measurePhoto } from '@/lib/image';
+import { ImageError } from '@/lib/image';
+import { measureOffThread } from '@/lib/image/measurePool';
+import { withMeasureSlot } from '@/lib/http/measureSlots';
 import { MAX_PHOTO_BYTES, TOO_LARGE_MESSAGE } from '@/lib/uploads/limits';
 import { measureNeutralSchema, measureRegionsSchema } from '@/lib/validations/color';
 
@@ -30,13 +32,13 @@ function jsonField<T extends z.ZodType>(form: FormData, field: string, schema: T
 // Measures regions of an uploaded photo without storing anything.
 export const POST = withApi(async (req) => {
   assertSameOrigin(req);
-  await requireMember();
+  const member = await requireMember();
   const form = await readMultipart(req, MAX_PHOTO_BYTES, TOO_LARGE_MESSAGE, 'an `image` file and a `regions` JSON field');
   const regions = jsonField(form, 'regions', measureRegionsSchema, true)!;
   const neutral = jsonField(form, 'neutral', measureNeutralSchema, false);
   const { bytes } = await formFile(form, 'image', MAX_PHOTO_BYTES, TOO_LARGE_MESSAGE);
   try {
-    return json(await measurePhoto(bytes, regions, neutral));
+    return json(await withMeasureSlot(member.user.id, () => measureOffThread(bytes, regions, neutral)));
   } catch (err) {
     if (err instanceof ImageError) throw new ApiError(err.status, err.kind, err.message);
     throw err;

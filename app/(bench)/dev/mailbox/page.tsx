@@ -11,12 +11,12 @@ export const dynamic = 'force-dynamic';
 export default async function MailboxPage() {
   const { POURPROOF_DEV_TOOLS, MAIL_FAKE_URL } = env();
   if (POURPROOF_DEV_TOOLS !== '1' || !MAIL_FAKE_URL) notFound();
-  await requirePageMember();
+  await requirePageMember('owner');
   return (
     <section>
       <h1 className="text-2xl font-semibold">Mailbox</h1>
       <p className="mb-4 mt-1 text-ink-soft">
-        Development only: every e-mail the app sent to the local mail stand-in, newest first. Nothing here left this machine.
+        Development only: every e-mail the app sent for your shop to the local mail stand-in (invitations and notices to your members), newest first. Nothing here left this machine.
       </p>
       <MailboxList />
     </section>

@@ -4,6 +4,7 @@ import { appUrl } from '@/lib/appUrl';
 import { requireMember, requireRole } from '@/lib/auth/current';
 import { logBatch } from '@/lib/batches/logBatch';
 import { json, readJson, withApi } from '@/lib/http/api';
+import { withMeasureSlot } from '@/lib/http/measureSlots';
 import { assertSameOrigin } from '@/lib/http/origin';
 import { loadMatch } from '@/lib/matches/loadMatch';
 import { batchSchema } from '@/lib/validations/production';
@@ -22,6 +23,6 @@ export const POST = withApi<{ id: string }>(async (req, { params }) => {
   const member = await requireRole('maker');
   const { id } = await params;
   const input = await readJson(req, batchSchema);
-  const batchId = await logBatch(db(), member, id, input, appUrl(req));
+  const batchId = await withMeasureSlot(member.user.id, () => logBatch(db(), member, id, input, appUrl(req)));
   return json(getBatch(db(), member.team.id, batchId), 201);
 });
