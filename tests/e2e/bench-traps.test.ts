@@ -154,8 +154,16 @@ describe.runIf(browserAvailable())('browser: the bench without traps, on a phone
     expect(await recent.getByText('(reference)').count()).toBeGreaterThan(0);
     expect(await noSideScroll(page)).toBe(true);
     await page.screenshot({ path: artifactPath('traps-photos-390.png') });
-    await recent.getByRole('link', { name }).first().click();
+    // A photo is reused as a reference: it opens on the match's sampler as a draft, and can be let go.
+    const card = recent.getByRole('listitem').filter({ has: page.getByRole('link', { name }) }).first();
+    await card.getByLabel('Use as the reference of').selectOption({ label: name });
+    await card.getByRole('button', { name: 'Use', exact: true }).click();
+    await page.waitForURL(/\/matches\/[^/?#]+#target$/);
     await page.getByRole('heading', { name, level: 1 }).waitFor();
+    await surface.waitFor({ timeout: 20_000 });
+    await page.getByText('This photo is kept with the match until you save the target.').waitFor();
+    await page.getByRole('button', { name: 'Use another photo' }).click();
+    await page.getByText('Add a reference photo').waitFor();
 
     // 2. Doses typed as said; the card carried over; a pour saved without it says the light was not corrected.
     const colorants = (await page.request.get(`${baseUrl()}/api/colorants`).then((r) => r.json())) as any[];
@@ -303,6 +311,16 @@ describe.runIf(browserAvailable())('browser: the bench without traps, on a phone
     await phone.getByRole('table').first().waitFor();
     expect(await noSideScroll(phone)).toBe(true);
     await phone.screenshot({ path: artifactPath('traps-matches-390.png'), fullPage: true });
+    // Every section at 390 px: reachable from the menu, no sideways scroll, one screenshot each.
+    for (const section of ['Photos', 'Colorants', 'Molds', 'Standards', 'Batches', 'Team', 'Calculator']) {
+      const nav = phone.getByRole('navigation', { name: 'Main' });
+      await nav.getByRole('button', { name: /^Menu/ }).click();
+      await nav.getByRole('link', { name: section, exact: true }).click();
+      await phone.getByRole('heading', { name: section, level: 1 }).waitFor();
+      expect(await nav.getByRole('link', { name: section, exact: true }).isVisible(), `${section}: the menu closes on arrival`).toBe(false);
+      expect(await noSideScroll(phone), section).toBe(true);
+      await phone.screenshot({ path: artifactPath(`traps-${section.toLowerCase()}-390.png`), fullPage: true });
+    }
     await desk.context().close();
     await phone.context().close();
   });
