@@ -78,7 +78,7 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
         <h2 id="target-h" className="text-lg font-semibold">Target</h2>
         {match.target ? <TargetSwatches target={match.target} photoCount={match.target.photos.length} /> : <p className="text-ink-soft">No target yet: sample every zone on a reference photo.</p>}
         {editable && (!match.target || mode === 'reference' || match.draft) ? (
-          <TargetSampling match={match} onSaved={() => { setMode('compare'); void mutate(); }} />
+          <TargetSampling match={match} onSaved={() => { setMode('compare'); void mutate(); }} onReleased={() => void mutate()} />
         ) : null}
         {editable && match.target && mode !== 'reference' && !match.draft ? (
           <Button variant="secondary" onClick={() => setMode('reference')}>Add another reference photo</Button>

@@ -26,7 +26,7 @@ function readMarks(matchId: string, photoId: string): Record<string, Shape> | un
 // card if one is in frame), and let the server measure. Several reference
 // photos average into the target. The uploaded photo is attached to the match
 // at once as a draft (POST …/draft-photo), so it survives a reload.
-export function TargetSampling({ match, onSaved }: { match: MatchDetail; onSaved: () => void }) {
+export function TargetSampling({ match, onSaved, onReleased }: { match: MatchDetail; onSaved: () => void; onReleased?: () => void }) {
   const [photo, setPhoto] = useState<Pick<UploadedPhoto, 'photoId' | 'width' | 'height'> | null>(match.draft);
   // This renders only in the browser (the match comes from SWR), so the marks
   // kept in localStorage can be read as the state starts.
@@ -67,6 +67,7 @@ export function TargetSampling({ match, onSaved }: { match: MatchDetail; onSaved
     if (old) window.localStorage.removeItem(marksKey(match.id, old.photoId));
     try {
       await apiFetch(`/api/matches/${match.id}/draft-photo`, { method: 'DELETE' });
+      onReleased?.();
     } catch (e) {
       setError((e as Error).message);
     }
