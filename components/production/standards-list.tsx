@@ -24,7 +24,7 @@ export function StandardsList({ standards, canLog = false }: { standards: Standa
               </h2>
               <StatusBadge status={s.status} />
               {canLog ? (
-                <Link href={`/matches/${s.matchId}?log=batch#batches`} className={`${linkClass} ml-auto bg-accent text-white`}>
+                <Link href={`/matches/${s.matchId}?log=batch#batches`} className="ml-auto inline-flex min-h-tap items-center rounded-md bg-accent px-4 font-medium text-white hover:bg-accent-strong">
                   Log a batch<span className="sr-only"> of {s.name}</span>
                 </Link>
               ) : null}
