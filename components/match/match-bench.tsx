@@ -107,7 +107,7 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
       ) : null}
       {match.target && mode === 'compare' && selectedId ? (
         <div id="compare" className="scroll-mt-16">
-          <PourCompare key={selectedId} pourId={selectedId} previousId={previousId} target={match.target} />
+          <PourCompare key={selectedId} pourId={selectedId} previousId={previousId} target={match.target} tolerance={match.tolerance} />
         </div>
       ) : null}
       {match.target && mode === 'compare' && selectedId ? (

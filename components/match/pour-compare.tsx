@@ -13,7 +13,7 @@ import { NextPourHint } from './next-pour-hint';
 import { RecipeDiff } from './recipe-diff';
 import { ZoneReadout } from './zone-readout';
 
-export function PourCompare({ pourId, previousId, target }: { pourId: string; previousId: string | null; target: TargetDetail }) {
+export function PourCompare({ pourId, previousId, target, tolerance }: { pourId: string; previousId: string | null; target: TargetDetail; tolerance?: number }) {
   const { data: pour, error } = useSWR<PourView>(`/api/pours/${pourId}`, swrFetcher);
   const { data: previous } = useSWR<PourView>(previousId ? `/api/pours/${previousId}` : null, swrFetcher);
   const [surround, setSurround] = useState<Surround>('grey');
@@ -36,7 +36,7 @@ export function PourCompare({ pourId, previousId, target }: { pourId: string; pr
             <SwatchPair surround={surround} left={z.target.hex} right={z.hex} leftLabel="target" rightLabel={`pour #${pour.number}`} />
           </div>
           <div className="space-y-1">
-            <ZoneReadout zone={z} targetFlake={target.zones.find((t) => t.name === z.name)?.flakeCoverage ?? null} />
+            <ZoneReadout zone={z} targetFlake={target.zones.find((t) => t.name === z.name)?.flakeCoverage ?? null} tolerance={tolerance} />
             <LightNote light={pour.light} />
           </div>
         </div>
