@@ -9,7 +9,7 @@ export const metadata: Metadata = {
   description: 'Colour matching for soft-plastic bait shops: measured pours, signed-off standards, checked batches.',
 };
 
-export const viewport: Viewport = { width: 'device-width', initialScale: 1 };
+export const viewport: Viewport = { width: 'device-width', initialScale: 1, themeColor: '#1f5f8b' };
 
 export default function RootLayout({ children }: { children: React.ReactNode }) {
   return (

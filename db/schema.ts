@@ -41,6 +41,8 @@ export const teams = sqliteTable('teams', {
   currency: text('currency').notNull().default('USD'),
   // Whether a test pour with a batch size draws its doses from stock too.
   stockDrawsPours: integer('stock_draws_pours', { mode: 'boolean' }).notNull().default(false),
+  // The shop's IANA time zone: dates on pages and printed sheets read in it.
+  timeZone: text('time_zone').notNull().default('UTC'),
   createdAt: integer('created_at').notNull().default(now),
 });
 
@@ -180,6 +182,9 @@ export const matches = sqliteTable(
     createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: integer('created_at').notNull().default(now),
     updatedAt: integer('updated_at').notNull().default(now),
+    // A reference photo uploaded for the target but not yet measured: kept with
+    // the match at once, so a reload or a walk away does not lose it.
+    draftPhotoId: text('draft_photo_id').references(() => photos.id, { onDelete: 'set null' }),
   },
   (t) => [index('matches_team_idx').on(t.teamId)],
 );

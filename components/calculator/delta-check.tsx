@@ -36,11 +36,15 @@ export function DeltaCheck({ tolerance }: { tolerance: number }) {
     setError(null);
     const a = parseColour(ref);
     const b = parseColour(trial);
-    if (!a || !b) return setError('Type each colour as three numbers (L* a* b*) or as a hex code like #7a5a3c.');
+    if (!a || !b) {
+      setOut(null);
+      return setError('Type each colour as three numbers (L* a* b*) or as a hex code like #7a5a3c.');
+    }
     try {
       const r = await apiFetch<Result>('/api/delta-e', { method: 'POST', body: JSON.stringify({ reference: a, sample: b, tolerance }) });
       setOut({ r, a, b });
     } catch (err) {
+      setOut(null);
       setError((err as Error).message);
     }
   }
@@ -48,8 +52,8 @@ export function DeltaCheck({ tolerance }: { tolerance: number }) {
     <section aria-labelledby="delta-h" className="space-y-3 rounded-lg border border-panel-line bg-white p-4">
       <h2 id="delta-h" className="text-lg font-semibold">Compare two colours</h2>
       <form onSubmit={run} className="grid gap-3 sm:grid-cols-[1fr_1fr_auto] sm:items-end" aria-label="Compare two colours">
-        <Field label="Target (L* a* b*, or hex)"><TextInput value={ref} onChange={(e) => setRef(e.target.value)} placeholder="38.2 9.5 22.4" /></Field>
-        <Field label="Trial (L* a* b*, or hex)"><TextInput value={trial} onChange={(e) => setTrial(e.target.value)} placeholder="#6b4f3a" /></Field>
+        <Field label="Target (L* a* b*, or hex)"><TextInput value={ref} onChange={(e) => { setRef(e.target.value); setOut(null); }} placeholder="38.2 9.5 22.4" /></Field>
+        <Field label="Trial (L* a* b*, or hex)"><TextInput value={trial} onChange={(e) => { setTrial(e.target.value); setOut(null); }} placeholder="#6b4f3a" /></Field>
         <Button type="submit">Compare</Button>
       </form>
       <FormError message={error} />

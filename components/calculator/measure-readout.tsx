@@ -1,3 +1,5 @@
+import { formatLab } from '@/lib/format';
+
 type Lab = { l: number; a: number; b: number };
 export type MeasureResult = {
   width: number;
@@ -11,7 +13,7 @@ export type MeasureResult = {
 };
 
 const pct = (v: number) => `${(v * 100).toFixed(1)} %`;
-const lab1 = (l: Lab) => `L* ${l.l.toFixed(1)} a* ${l.a.toFixed(1)} b* ${l.b.toFixed(1)}`;
+const lab1 = (l: Lab) => formatLab(l);
 
 // The server's measure: the base colour (flake and glare left out) on the
 // grey stage, with the figures beside it.

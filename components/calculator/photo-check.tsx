@@ -53,6 +53,13 @@ export function PhotoCheck() {
     }
   }
 
+  const choose = (f: File | null) => {
+    setResult(null);
+    setError(null);
+    setSize(null);
+    setFile(f);
+  };
+
   return (
     <section aria-labelledby="photo-check-h" className="space-y-3 rounded-lg border border-panel-line bg-white p-4">
       <h2 id="photo-check-h" className="text-lg font-semibold">Measure a photo</h2>
@@ -64,13 +71,13 @@ export function PhotoCheck() {
           type="file"
           accept="image/jpeg,image/png,image/webp"
           className="sr-only"
-          onChange={(e) => {
-            setResult(null);
-            setError(null);
-            setSize(null);
-            setFile(e.target.files?.[0] ?? null);
-          }}
+          onChange={(e) => choose(e.target.files?.[0] ?? null)}
         />
+      </label>
+      <label className="flex min-h-tap cursor-pointer items-center justify-center gap-2 rounded-md border border-panel-line bg-white px-4 font-medium hover:bg-panel">
+        Take a photo with the camera
+        {/* On a phone, the back camera straight away (HTML Media Capture, W3C). */}
+        <input type="file" accept="image/*" capture="environment" className="sr-only" data-testid="check-camera-input" onChange={(e) => choose(e.target.files?.[0] ?? null)} />
       </label>
       {url && size ? <PhotoSampler key={url} src={url} width={size.w} height={size.h} zones={[ZONE]} withNeutral onChange={onShapes} /> : null}
       <FormError message={error} />

@@ -2,10 +2,11 @@ import type { ColorantKind, DoseUnit } from '@/db/schema';
 
 // Figures as the library shows them: every number with its unit, formatted
 // the same on the server and in the browser (no locale, so no hydration drift).
-export const trimmed = (n: number, digits = 3) => String(Number(n.toFixed(digits)));
+import { formatDose, formatLab, formatMl, trimmed } from '@/lib/format';
+
+export { trimmed };
 
 const UNIT_ONE: Record<DoseUnit, string> = { drops: 'drop', tsp: 'tsp', g: 'g', ml: 'mL' };
-const UNIT_MANY: Record<DoseUnit, string> = { drops: 'drops', tsp: 'tsp', g: 'g', ml: 'mL' };
 
 export const UNIT_LABEL: Record<DoseUnit, string> = { drops: 'drops', tsp: 'teaspoons (tsp)', g: 'grams (g)', ml: 'millilitres (mL)' };
 
@@ -32,7 +33,7 @@ export const KIND_OPTION: Record<ColorantKind, string> = {
 export const USUAL_UNIT: Record<ColorantKind, DoseUnit> = { base: 'ml', pigment: 'drops', pearl: 'tsp', flake: 'tsp', glow: 'tsp', additive: 'ml' };
 
 export const perUnit = (unit: DoseUnit) => UNIT_ONE[unit];
-export const amountOf = (n: number, unit: DoseUnit) => `${trimmed(n)} ${n === 1 ? UNIT_ONE[unit] : UNIT_MANY[unit]}`;
+export const amountOf = (n: number, unit: DoseUnit) => formatDose(n, unit);
 // Money reads with at least two decimals (0.30), more only where a small
 // per-drop price needs them (0.009).
 export function money(n: number): string {
@@ -41,8 +42,8 @@ export function money(n: number): string {
 }
 export const costPer = (n: number, unit: DoseUnit) => `${money(n)} per ${UNIT_ONE[unit]}`;
 export const inches = (n: number) => `${trimmed(n)} in`;
-export const millilitres = (n: number) => `${trimmed(n, 1)} mL`;
-export const lab = (s: { l: number; a: number; b: number }) => `L* ${s.l.toFixed(1)}  a* ${s.a.toFixed(1)}  b* ${s.b.toFixed(1)}`;
+export const millilitres = formatMl;
+export const lab = formatLab;
 
 // Blank number inputs are "not given" (null); anything else goes to zod as a
 // number, where NaN is answered "… must be a number".

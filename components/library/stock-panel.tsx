@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import { useEffect, useRef, useState } from 'react';
 import useSWR from 'swr';
-import { day } from '@/components/production/when';
+import { When } from '@/components/ui/when';
 import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
@@ -70,7 +70,7 @@ export function StockPanel({ colorantId, canEdit, onClose, onMoved }: { colorant
                 <tbody>
                   {data.movements.map((m) => (
                     <tr key={m.id} className="border-t border-panel-line align-top">
-                      <td className="num py-1 pr-2">{day(m.createdAt)}</td>
+                      <td className="num py-1 pr-2"><When at={m.createdAt} dayOnly /></td>
                       <td className="pr-2">{m.batchId ? <Link href={`/batches/${m.batchId}/sheet`} className="underline underline-offset-4">{KIND[m.kind]}</Link> : KIND[m.kind]}{m.note ? ` — ${m.note}` : ''}{m.by ? <span className="block text-xs text-ink-soft">{m.by}</span> : null}</td>
                       <td className="num whitespace-nowrap text-right">{m.amount > 0 ? '+' : '−'}{amountOf(Math.abs(m.amount), data.unit)}</td>
                       <td className="num whitespace-nowrap pl-2 text-right">{amountOf(m.balance, data.unit)}</td>

@@ -5,13 +5,17 @@ import { useState } from 'react';
 import useSWR from 'swr';
 import { MatchBatches } from '@/components/production/match-batches';
 import { SignOffPanel } from '@/components/production/signoff-panel';
+import { NEUTRAL } from '@/components/sampler/photo-sampler';
 import { Button } from '@/components/ui/button';
 import type { MatchDetail } from '@/db/queries/matchDetail';
 import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { swrFetcher } from '@/lib/http/client';
 import type { VolumeUnit } from '@/lib/recipes';
+import { formatDeltaE } from '@/lib/format';
 import { DeltaChart } from './delta-chart';
+import { EditMatch } from './edit-match';
+import { FocusFirstField, JumpBar } from './match-sections';
 import { PourCompare } from './pour-compare';
 import { PourForm } from './pour-form';
 import { PourList } from './pour-list';
@@ -39,8 +43,11 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
   const selectedIndex = match.pours.findIndex((p) => p.id === selectedId);
   const previousId = selectedIndex > 0 ? match.pours[selectedIndex - 1]!.id : null;
   const editable = canPour && match.status === 'open';
-  const lastShapes = (): Record<string, Shape> =>
-    Object.fromEntries((latestPour?.zones ?? match.target?.photos[0]?.zones ?? []).map((z) => [z.name, z.shape as Shape]));
+  // …and the grey card where it was last marked, if any photo of the match had one.
+  const lastShapes = (): Record<string, Shape> => ({
+    ...Object.fromEntries((latestPour?.zones ?? match.target?.photos[0]?.zones ?? []).map((z) => [z.name, z.shape as Shape])),
+    ...(match.lastNeutral ? { [NEUTRAL]: match.lastNeutral.shape } : {}),
+  });
   const select = (id: string) => {
     setMode('compare');
     router.replace(`/matches/${matchId}?pour=${id}`, { scroll: false });
@@ -59,25 +66,28 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
           <h1 className="text-2xl font-semibold">{match.name}</h1>
           <StatusBadge status={match.status} />
           {production.canDecide ? <ArchiveControl matchId={match.id} archived={match.status === 'archived'} onDone={() => void mutate()} /> : null}
+          {canPour && match.status !== 'archived' ? <EditMatch match={match} onSaved={() => void mutate()} /> : null}
         </div>
         <p className="mt-1 text-ink-soft">
-          Zones: {match.zones.join(', ')} · tolerance {match.tolerance.toFixed(1)} ΔE00{match.notes ? ` · ${match.notes}` : ''}
+          Zones: {match.zones.join(', ')} · tolerance {formatDeltaE(match.tolerance)} ΔE00{match.notes ? ` · ${match.notes}` : ''}
         </p>
       </header>
 
-      <section aria-labelledby="target-h" className="space-y-3">
+      <JumpBar match={match} hasSelection={Boolean(selectedId)} />
+
+      <section id="target" aria-labelledby="target-h" className="scroll-mt-16 space-y-3">
         <h2 id="target-h" className="text-lg font-semibold">Target</h2>
         {match.target ? <TargetSwatches target={match.target} photoCount={match.target.photos.length} /> : <p className="text-ink-soft">No target yet: sample every zone on a reference photo.</p>}
-        {editable && (!match.target || mode === 'reference') ? (
-          <TargetSampling match={match} onSaved={() => { setMode('compare'); void mutate(); }} />
+        {editable && (!match.target || mode === 'reference' || match.draft) ? (
+          <TargetSampling match={match} onSaved={() => { setMode('compare'); void mutate(); }} onReleased={() => void mutate()} />
         ) : null}
-        {editable && match.target && mode !== 'reference' ? (
+        {editable && match.target && mode !== 'reference' && !match.draft ? (
           <Button variant="secondary" onClick={() => setMode('reference')}>Add another reference photo</Button>
         ) : null}
       </section>
 
       {match.target ? (
-        <section aria-labelledby="pours-h" className="space-y-3">
+        <section id="pours" aria-labelledby="pours-h" className="scroll-mt-16 space-y-3">
           <div className="flex flex-wrap items-center justify-between gap-2">
             <h2 id="pours-h" className="text-lg font-semibold">Pours</h2>
             {canPour && match.status !== 'archived' && mode !== 'pour' ? <Button onClick={() => setMode('pour')}>New pour</Button> : null}
@@ -85,21 +95,29 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
           <PourList pours={match.pours} selectedId={selectedId} onSelect={select} />
           <DeltaChart match={match} />
           {mode === 'pour' ? (
-            <div className="rounded-lg border border-panel-line bg-white p-4">
+            <FocusFirstField className="rounded-lg border border-panel-line bg-white p-4">
               <div className="mb-3 flex items-center justify-between">
                 <h3 className="text-lg font-semibold">Pour #{(latest?.number ?? 0) + 1}</h3>
                 <Button variant="secondary" onClick={() => setMode('compare')}>Cancel</Button>
               </div>
               {latestPourId && !latestPour ? <p role="status" className="text-ink-soft">Loading the last pour…</p> : null}
               {!latestPourId || latestPour ? <PourForm match={match} initialShapes={lastShapes()} previous={latestPour} onSaved={(id) => { void mutate(); select(id); }} /> : null}
-            </div>
+            </FocusFirstField>
           ) : null}
-          {mode === 'compare' && selectedId && match.target ? <PourCompare key={selectedId} pourId={selectedId} previousId={previousId} target={match.target} tolerance={match.tolerance} /> : null}
-          {mode === 'compare' && selectedId ? <SignOffPanel key={`signoff-${selectedId}`} match={match} pourId={selectedId} canSubmit={canPour} canDecide={production.canDecide} /> : null}
         </section>
       ) : null}
+      {match.target && mode === 'compare' && selectedId ? (
+        <div id="compare" className="scroll-mt-16">
+          <PourCompare key={selectedId} pourId={selectedId} previousId={previousId} target={match.target} tolerance={match.tolerance} />
+        </div>
+      ) : null}
+      {match.target && mode === 'compare' && selectedId ? (
+        <div id="signoff" className="scroll-mt-16">
+          <SignOffPanel key={`signoff-${selectedId}`} match={match} pourId={selectedId} canSubmit={canPour} canDecide={production.canDecide} />
+        </div>
+      ) : null}
 
-      <MatchBatches match={match} canLog={canPour} sprueAllowanceMl={production.sprueAllowanceMl} volumeUnit={production.volumeUnit} selectedId={params.get('batch')} onSelect={selectBatch} />
+      <MatchBatches match={match} canLog={canPour} sprueAllowanceMl={production.sprueAllowanceMl} volumeUnit={production.volumeUnit} selectedId={params.get('batch')} onSelect={selectBatch} startLogging={params.get('log') === 'batch'} />
     </div>
   );
 }

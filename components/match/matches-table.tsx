@@ -10,12 +10,14 @@ import {
   useReactTable,
 } from '@tanstack/react-table';
 import Link from 'next/link';
+import { When } from '@/components/ui/when';
 import { useMemo, useState } from 'react';
 import { BandBadge } from '@/components/color/band-badge';
 import { inputClass } from '@/components/ui/field';
 import type { MatchView } from '@/db/queries/matches';
 import { MATCH_STATUSES } from '@/db/schema';
 import { bandFor } from '@/lib/color/bandFor';
+import { formatDeltaE } from '@/lib/format';
 import { StatusBadge } from './status-badge';
 
 const SORT_ARIA = { asc: 'ascending', desc: 'descending' } as const;
@@ -34,8 +36,8 @@ const columns: ColumnDef<MatchView>[] = [
     cell: ({ row }) => <Link href={`/matches/${row.original.id}`} className="font-medium text-accent underline-offset-2 hover:underline">{row.original.name}</Link>,
   },
   { accessorKey: 'status', header: 'Status', cell: ({ getValue }) => <StatusBadge status={getValue<string>()} />, filterFn: 'equalsString' },
-  { id: 'zones', header: 'Zones', accessorFn: (m) => m.zones.join(', '), enableSorting: false },
-  { id: 'pours', header: 'Pours', accessorFn: (m) => m.pours.length, meta: { num: true } },
+  { id: 'zones', header: 'Zones', accessorFn: (m) => m.zones.join(', '), enableSorting: false, meta: { wide: true } },
+  { id: 'pours', header: 'Pours', accessorFn: (m) => m.pours.length, meta: { num: true, wide: true } },
   {
     id: 'latest',
     header: 'Latest ΔE00 per zone',
@@ -48,7 +50,7 @@ const columns: ColumnDef<MatchView>[] = [
           {pour.zones.map((z) => (
             <li key={z.name} className="flex flex-wrap items-baseline gap-x-2">
               <span className="w-12 text-ink-soft">{z.name}</span>
-              <span className="num w-8 text-right font-semibold">{z.dE00 === null ? '—' : z.dE00.toFixed(1)}</span>
+              <span className="num w-8 text-right font-semibold">{z.dE00 === null ? '—' : formatDeltaE(z.dE00)}</span>
               {z.dE00 === null ? null : <BandBadge band={bandFor(z.dE00)} className="text-xs" />}
             </li>
           ))}
@@ -56,9 +58,17 @@ const columns: ColumnDef<MatchView>[] = [
       );
     },
   },
-  { id: 'activity', header: 'Last activity', accessorFn: (m) => m.updatedAt, cell: ({ getValue }) => new Date(getValue<number>()).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' }) },
-  { id: 'maker', header: 'Started by', accessorFn: (m) => m.createdBy ?? '—' },
+  { id: 'activity', header: 'Last activity', accessorFn: (m) => m.updatedAt, cell: ({ getValue }) => <When at={getValue<number>()} dayOnly />, meta: { wide: true } },
+  { id: 'maker', header: 'Started by', accessorFn: (m) => m.createdBy ?? '—', meta: { wide: true } },
 ];
+
+// At phone width the table keeps what a maker scans for — the match, its
+// status and the latest ΔE00 — and leaves the rest to wider screens; the
+// match's name stays pinned at the left if the table still scrolls.
+function cellClass(id: string, meta: unknown): string {
+  if ((meta as { wide?: boolean } | undefined)?.wide) return 'hidden md:table-cell';
+  return id === 'name' ? 'sticky left-0 z-10 bg-inherit' : '';
+}
 
 export function MatchesTable({ data }: { data: MatchView[] }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'activity', desc: true }]);
@@ -92,13 +102,13 @@ export function MatchesTable({ data }: { data: MatchView[] }) {
       </div>
       <div className="overflow-x-auto rounded-lg border border-panel-line bg-white">
         <table className="w-full text-left text-sm" aria-label="Matches">
-          <thead className="bg-panel-deep">
+          <thead className="bg-panel-deep [&_tr]:bg-panel-deep">
             {table.getHeaderGroups().map((hg) => (
               <tr key={hg.id}>
                 {hg.headers.map((h) => {
                   const sorted = h.column.getIsSorted();
                   return (
-                    <th key={h.id} className="p-0" aria-sort={sorted ? SORT_ARIA[sorted] : undefined}>
+                    <th key={h.id} className={`p-0 ${cellClass(h.column.id, h.column.columnDef.meta)}`} aria-sort={sorted ? SORT_ARIA[sorted] : undefined}>
                       {h.column.getCanSort() ? (
                         <button type="button" onClick={h.column.getToggleSortingHandler()} className="flex min-h-tap w-full items-center gap-1 p-3 text-left font-semibold">
                           {flexRender(h.column.columnDef.header, h.getContext())}
@@ -115,9 +125,9 @@ export function MatchesTable({ data }: { data: MatchView[] }) {
           </thead>
           <tbody>
             {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-t border-panel-line align-top">
+              <tr key={row.id} className="border-t border-panel-line bg-white align-top">
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="p-3">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
+                  <td key={cell.id} className={`p-3 ${cellClass(cell.column.id, cell.column.columnDef.meta)}`}>{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
                 ))}
               </tr>
             ))}

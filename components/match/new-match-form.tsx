@@ -17,6 +17,16 @@ import { createMatchSchema, zoneName } from '@/lib/validations/match';
 const formSchema = createMatchSchema.extend({ zones: z.array(z.object({ name: zoneName })).min(1, 'a match needs at least one zone') });
 type Values = z.input<typeof formSchema>;
 
+// Enter in a one-line box moves to the next field instead of creating the
+// match half-filled: only the "Create match" button creates it.
+function enterMovesOn(e: React.KeyboardEvent<HTMLFormElement>) {
+  const t = e.target as HTMLElement;
+  if (e.key !== 'Enter' || !(t instanceof HTMLInputElement)) return;
+  e.preventDefault();
+  const fields = [...e.currentTarget.querySelectorAll<HTMLElement>('input, select, textarea, button[type="submit"]')].filter((f) => !f.hasAttribute('disabled'));
+  fields[fields.indexOf(t) + 1]?.focus();
+}
+
 export function NewMatchForm({ defaultTolerance, onDone }: { defaultTolerance: number; onDone?: () => void }) {
   const router = useRouter();
   const { mutate } = useSWRConfig();
@@ -40,10 +50,11 @@ export function NewMatchForm({ defaultTolerance, onDone }: { defaultTolerance: n
   });
   const err = formState.errors;
   return (
-    <form onSubmit={onSubmit} className="grid gap-4" noValidate aria-label="New match">
+    <form onSubmit={onSubmit} onKeyDown={enterMovesOn} className="grid gap-4" noValidate aria-label="New match">
       <FormError message={error} />
       <Field label="Name" error={err.name?.message} hint="What the colour is called in the shop, e.g. “Dusk crawdad”.">
-        <TextInput {...register('name')} />
+        {/* The form has just opened at the maker's request: start typing the name. */}
+        <TextInput autoFocus {...register('name')} />
       </Field>
       <fieldset>
         <legend className="mb-1 text-sm font-medium">Zones (each part of the bait that carries one colour)</legend>

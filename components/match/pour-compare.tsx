@@ -7,6 +7,8 @@ import { RegionsOnPhoto } from '@/components/match/regions-on-photo';
 import type { PourView } from '@/db/queries/pours';
 import type { TargetDetail } from '@/db/queries/matchDetail';
 import { swrFetcher } from '@/lib/http/client';
+import { formatCups, formatTemp } from '@/lib/format';
+import { LightNote } from './light-note';
 import { NextPourHint } from './next-pour-hint';
 import { RecipeDiff } from './recipe-diff';
 import { ZoneReadout } from './zone-readout';
@@ -33,7 +35,10 @@ export function PourCompare({ pourId, previousId, target, tolerance }: { pourId:
             <h4 className="mb-2 font-semibold capitalize">{z.name}</h4>
             <SwatchPair surround={surround} left={z.target.hex} right={z.hex} leftLabel="target" rightLabel={`pour #${pour.number}`} />
           </div>
-          <ZoneReadout zone={z} targetFlake={target.zones.find((t) => t.name === z.name)?.flakeCoverage ?? null} tolerance={tolerance} />
+          <div className="space-y-1">
+            <ZoneReadout zone={z} targetFlake={target.zones.find((t) => t.name === z.name)?.flakeCoverage ?? null} tolerance={tolerance} />
+            <LightNote light={pour.light} />
+          </div>
         </div>
       ))}
       <NextPourHint pourId={pour.id} />
@@ -45,7 +50,7 @@ export function PourCompare({ pourId, previousId, target, tolerance }: { pourId:
         <h4 className="mb-1 font-semibold">Recipe{previous ? ` (changes since pour #${previous.number})` : ''}</h4>
         <RecipeDiff current={pour.recipe} previous={previous?.recipe ?? null} />
         <p className="mt-2 text-sm text-ink-soft">
-          {[pour.mold ? `Mold: ${pour.mold}` : null, pour.batchCups ? `${pour.batchCups} cup${pour.batchCups === 1 ? "" : "s"}` : null, pour.tempF ? `${pour.tempF} °F` : null, pour.notes].filter(Boolean).join(' · ')}
+          {[pour.mold ? `Mold: ${pour.mold}` : null, pour.batchCups ? formatCups(pour.batchCups) : null, pour.tempF ? formatTemp(pour.tempF) : null, pour.notes].filter(Boolean).join(' · ')}
         </p>
       </div>
     </section>

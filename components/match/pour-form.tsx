@@ -16,17 +16,28 @@ import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { apiFetch, swrFetcher } from '@/lib/http/client';
 import type { UploadedPhoto } from '@/lib/uploads/limits';
+import { parseAmount } from '@/lib/recipes/parseAmount';
 import { recipeLineSchema } from '@/lib/validations/match';
 import type { PourSuggestion } from '@/lib/matches/suggestionTypes';
 import { NextPourHint } from './next-pour-hint';
+import { CardCarriedNote } from './light-note';
 import { type ColorantOption, RecipeLines } from './recipe-lines';
 import { StartingRecipeButton } from './starting-recipe-button';
 
 const optionalNumber = (schema: z.ZodNumber) => z.preprocess((v) => (v === '' || Number.isNaN(v) ? undefined : v), schema.optional());
+// Batch size as a maker says it ("1 1/2", "¾"), through the one dose parser.
+const optionalAmount = (schema: z.ZodNumber) =>
+  z.preprocess((v, ctx) => {
+    if (v === '' || v === undefined || v === null || Number.isNaN(v)) return undefined;
+    const r = parseAmount(v as string | number);
+    if (r.ok) return r.value;
+    ctx.addIssue({ code: 'custom', message: r.message });
+    return z.NEVER;
+  }, schema.optional());
 const formSchema = z.object({
   recipe: z.array(recipeLineSchema.and(z.object({ colorantId: z.string().min(1, 'choose a colorant') }))),
   moldId: z.string().optional(),
-  batchCups: optionalNumber(z.number().gt(0, 'batch size must be more than 0').max(400)),
+  batchCups: optionalAmount(z.number().gt(0, 'batch size must be more than 0').max(400)),
   tempF: optionalNumber(z.number().min(32, 'at least 32 °F').max(500, 'at most 500 °F')),
   notes: z.string().max(4000).optional(),
   correctsPourId: z.string().optional(),
@@ -85,7 +96,7 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
           notes: parsed.notes || undefined,
           correctsPourId: parsed.correctsPourId || undefined,
           zones: match.zones.map((name) => ({ name, shape: shapes[name] })),
-          neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL] } : undefined,
+          neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL], ...(match.lastNeutral?.L ? { L: match.lastNeutral.L } : {}) } : undefined,
         }),
       });
       onSaved(pour.id);
@@ -108,7 +119,7 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
           </select>
         </Field>
         <Field label="Batch size (cups)" error={formState.errors.batchCups?.message}>
-          <input type="number" step="any" min="0" className={inputClass} {...register('batchCups', { valueAsNumber: true })} />
+          <input type="text" inputMode="decimal" autoComplete="off" className={inputClass} {...register('batchCups')} />
         </Field>
         <Field label="Pour / injection temperature (°F)" error={formState.errors.tempF?.message}>
           <input type="number" step="1" className={inputClass} {...register('tempF', { valueAsNumber: true })} />
@@ -129,7 +140,8 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
       {photo ? (
         <>
           <PhotoSampler src={`/api/photos/${photo.photoId}/image`} width={photo.width} height={photo.height} zones={match.zones} initialShapes={initialShapes} withNeutral onChange={onShapes} />
-          {shapes[NEUTRAL] ? null : (
+          <CardCarriedNote neutral={match.lastNeutral} marked={Boolean(shapes[NEUTRAL])} />
+          {shapes[NEUTRAL] || match.lastNeutral ? null : (
             <p className="text-sm text-ink-soft">
               No grey card marked: a change of light between this photo and the reference will read as a colour difference. Mark the card if it is in frame.
             </p>

@@ -1,13 +1,14 @@
 import { BandBadge } from '@/components/color/band-badge';
 import type { PourSummary } from '@/db/queries/matches';
 import { bandFor } from '@/lib/color/bandFor';
+import { formatDeltaE } from '@/lib/format';
 
-// Pour numbers as large buttons, each with its worst zone's ΔE00 and band.
+// Pour numbers as large buttons, latest first, each with its worst zone's ΔE00 and band.
 export function PourList({ pours, selectedId, onSelect }: { pours: PourSummary[]; selectedId: string | null; onSelect: (id: string) => void }) {
   if (pours.length === 0) return <p className="text-ink-soft">No pours yet. Pour a test bait, photograph it under the same light, and add it here.</p>;
   return (
     <ol className="flex flex-wrap gap-2" aria-label="Pours">
-      {pours.map((p) => {
+      {[...pours].reverse().map((p) => {
         const worst = Math.max(...p.zones.map((z) => z.dE00 ?? 0));
         return (
           <li key={p.id}>
@@ -18,7 +19,7 @@ export function PourList({ pours, selectedId, onSelect }: { pours: PourSummary[]
               className={`min-h-tap rounded-md border px-3 py-1 text-left text-sm ${p.id === selectedId ? 'border-ink bg-white shadow-sm' : 'border-panel-line bg-panel'}`}
             >
               <span className="block font-semibold">#{p.number} <span className="font-normal text-ink-soft">{p.status === 'measured' ? '' : p.status}</span></span>
-              <span className="num">{worst.toFixed(1)} ΔE00 </span>
+              <span className="num">{formatDeltaE(worst)} ΔE00 </span>
               <BandBadge band={bandFor(worst)} className="text-xs" />
             </button>
           </li>

@@ -1,4 +1,5 @@
 import type { PourView } from '@/db/queries/pours';
+import { doseAmount, formatDose } from '@/lib/format';
 
 type Line = PourView['recipe'][number];
 const key = (l: Line) => `${l.zone}|${l.colorantId}|${l.unit}`;
@@ -14,10 +15,10 @@ export function RecipeDiff({ current, previous }: { current: Line[]; previous: L
     return { l, before: before?.amount ?? null };
   });
   const removed = (previous ?? []).filter((l) => !seen.has(key(l)));
-  const change = (now: number, before: number | null) => {
+  const change = (now: number, before: number | null, unit: Line['unit']) => {
     if (before === null) return previous ? 'new' : '';
     const d = now - before;
-    return Math.abs(d) < 1e-9 ? 'same' : `${d > 0 ? '+' : '−'}${Math.abs(d).toFixed(2)}`;
+    return Math.abs(d) < 1e-9 ? 'same' : `${d > 0 ? '+' : '−'}${doseAmount(Math.abs(d), unit)}`;
   };
   return (
     <table className="w-full text-left text-sm" aria-label="Recipe per cup">
@@ -28,16 +29,16 @@ export function RecipeDiff({ current, previous }: { current: Line[]; previous: L
         {rows.map(({ l, before }) => (
           <tr key={key(l)} className="border-t border-panel-line">
             <td className="py-1">{l.zone}</td>
-            <td>{l.colorant}</td>
-            <td className="text-right">{l.amount} {l.unit}</td>
-            <td className="text-right">{change(l.amount, before)}</td>
+            <td className="break-words">{l.colorant}</td>
+            <td className="num text-right">{formatDose(l.amount, l.unit)}</td>
+            <td className="num text-right">{change(l.amount, before, l.unit)}</td>
           </tr>
         ))}
         {removed.map((l) => (
           <tr key={`x-${key(l)}`} className="border-t border-panel-line text-ink-soft">
             <td className="py-1">{l.zone}</td>
             <td><s>{l.colorant}</s></td>
-            <td className="text-right">0 {l.unit}</td>
+            <td className="num text-right">{formatDose(0, l.unit)}</td>
             <td className="text-right">removed</td>
           </tr>
         ))}

@@ -1,4 +1,5 @@
 import type { TargetDetail } from '@/db/queries/matchDetail';
+import { formatDeltaE, formatLab } from '@/lib/format';
 
 // The target per zone on the grey stage, with its Lab (CIELAB, D65) and, with
 // several reference photos, how far they disagree.
@@ -10,8 +11,8 @@ export function TargetSwatches({ target, photoCount }: { target: TargetDetail; p
           <li key={z.name} className="w-36">
             <div className="h-20 rounded-sm border border-stage-rule" style={{ background: z.hex }} />
             <p className="mt-1 text-sm font-semibold text-white capitalize">{z.name}</p>
-            <p className="num text-xs text-white">L* {z.lab.l.toFixed(1)} a* {z.lab.a.toFixed(1)} b* {z.lab.b.toFixed(1)}</p>
-            {photoCount > 1 && z.spread !== null ? <p className="num text-xs text-white">photos differ by up to {z.spread.toFixed(1)} ΔE00</p> : null}
+            <p className="num text-xs text-white">{formatLab(z.lab)}</p>
+            {photoCount > 1 && z.spread !== null ? <p className="num text-xs text-white">photos differ by up to {formatDeltaE(z.spread)} ΔE00</p> : null}
           </li>
         ))}
       </ul>

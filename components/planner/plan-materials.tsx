@@ -1,5 +1,5 @@
 import { price } from '@/components/production/sheet-production';
-import { amount, unitLabel } from '@/components/production/dose';
+import { trimmed, unitLabel } from '@/lib/format';
 import { batchCost, batchDraws, type DrawColorant, type RunPlan } from '@/lib/recipes';
 import type { PlannerStandard } from './run-planner';
 
@@ -36,8 +36,8 @@ export function PlanMaterials({ plan, std, colorants, baseId, currency, dropsPer
           const c = colorants.find((x) => x.id === d.colorantId);
           return (
             <li key={d.colorantId}>
-              {d.name}: {amount(d.amount)} {unitLabel(d.unit)}
-              {c?.stock === null || c?.stock === undefined ? ' (stock not kept)' : ` of ${amount(c.stock)} on the shelf`}
+              {d.name}: {trimmed(d.amount)} {unitLabel(d.unit)}
+              {c?.stock === null || c?.stock === undefined ? ' (stock not kept)' : ` of ${trimmed(c.stock)} on the shelf`}
             </li>
           );
         })}

@@ -1,5 +1,5 @@
 import Link from 'next/link';
-import { dose, volume } from '@/components/production/dose';
+import { formatDose, formatVolume } from '@/lib/format';
 import { encodeBatchPrefill, ML_PER_CUP, VOLUME_LABEL, type RunPlan, type VolumeUnit } from '@/lib/recipes';
 import type { PlannerStandard } from './run-planner';
 import { PlanMaterials, type PlannerColorant } from './plan-materials';
@@ -26,8 +26,8 @@ export function PlanResult({ plan, std, unit, laminate, shelf }: { plan: RunPlan
       <h2 className="text-lg font-semibold">The plan</h2>
       <dl className="grid grid-cols-2 gap-x-4 gap-y-2 text-sm sm:grid-cols-4">
         <Figure label="Baits in all"><span className="num text-xl font-semibold">{plan.baits}</span></Figure>
-        <Figure label="Plastisol the shots take"><span className="num">{volume(plan.neededCups, unit)} ({mlOf(plan.neededMl)})</span></Figure>
-        <Figure label="To mix"><span className="num">{volume(plan.mixedCups, unit)}</span></Figure>
+        <Figure label="Plastisol the shots take"><span className="num">{formatVolume(plan.neededCups, unit)} ({mlOf(plan.neededMl)})</span></Figure>
+        <Figure label="To mix"><span className="num">{formatVolume(plan.mixedCups, unit)}</span></Figure>
         <Figure label="Left over"><span className="num">{mlOf(plan.leftoverMl)}</span></Figure>
       </dl>
       <div className="overflow-x-auto">
@@ -49,10 +49,10 @@ export function PlanResult({ plan, std, unit, laminate, shelf }: { plan: RunPlan
       <div className="space-y-3">
         {plan.zones.map((z) => (
           <div key={z.zone} className="rounded-md border border-panel-line p-3">
-            <h3 className="font-semibold"><span className="capitalize">{z.zone || 'The colour'}</span>: <span className="num">{volume(z.cups, unit)}{unit === 'ml' ? '' : ` (${mlOf(z.ml)})`}</span>
+            <h3 className="font-semibold"><span className="capitalize">{z.zone || 'The colour'}</span>: <span className="num">{formatVolume(z.cups, unit)}{unit === 'ml' ? '' : ` (${mlOf(z.ml)})`}</span>
               {laminate ? <span className="num font-normal"> — {Math.round(z.share * 100)} % of each shot, its own cup</span> : null}</h3>
             {z.recipe.length === 0 ? <p className="text-sm">Plain plastisol: no colorants recorded.</p> : (
-              <ul className="num text-sm">{z.recipe.map((l, i) => <li key={`${l.colorantId}-${i}`}><span className="font-semibold">{dose(l.total, l.unit)}</span> {l.name} <span className="text-ink-soft">({dose(l.perCup, l.unit)} per cup)</span></li>)}</ul>
+              <ul className="num text-sm">{z.recipe.map((l, i) => <li key={`${l.colorantId}-${i}`}><span className="font-semibold">{formatDose(l.total, l.unit)}</span> {l.name} <span className="text-ink-soft">({formatDose(l.perCup, l.unit)} per cup)</span></li>)}</ul>
             )}
           </div>
         ))}

@@ -14,21 +14,36 @@ import type { BatchView } from '@/db/queries/batches';
 import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { apiFetch, swrFetcher } from '@/lib/http/client';
-import { fromCups, moldYield, toCups, VOLUME_LABEL, zoneCupsProblem, type BatchPrefill, type VolumeUnit } from '@/lib/recipes';
+import { fromCups, moldYield, parseAmount, toCups, VOLUME_LABEL, zoneCupsProblem, type BatchPrefill, type VolumeUnit } from '@/lib/recipes';
+import { CardCarriedNote } from '@/components/match/light-note';
+import type { NeutralMark } from '@/db/queries/light';
+import type { MatchDetail } from '@/db/queries/matchDetail';
 import type { UploadedPhoto } from '@/lib/uploads/limits';
 import { MAX_BAITS, MAX_BATCH_CUPS } from '@/lib/validations/production';
-import { amount } from './dose';
+import { trimmed } from '@/lib/format';
 import { BatchRunFields } from './batch-run-fields';
 
 type Mold = { id: string; name: string; cavities: number; mlPerCavity: number };
 type Colorant = { id: string; name: string; kind: string };
 // Number inputs give strings: empty is "not given", anything else a number (NaN fails).
 const blank = (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v));
+// An amount as a maker says it ("1 1/2", "¾", "0,5"), through the one dose parser.
+const spokenAmount = (v: unknown, ctx: z.RefinementCtx) => {
+  if (v === '' || v === null || v === undefined) return undefined;
+  const r = parseAmount(v as string | number);
+  if (r.ok) return r.value;
+  ctx.addIssue({ code: 'custom', message: r.message });
+  return z.NEVER;
+};
+const typedAmount = (v: string | undefined) => {
+  const r = parseAmount(v ?? '');
+  return r.ok ? r.value : Number.NaN;
+};
 const count = (name: string) =>
   z.preprocess(blank, z.number().int(`${name} is a whole number`).min(0, `${name} cannot be negative`).max(MAX_BAITS).optional());
 const formSchema = z.object({
   // In the shop's batch size unit; the cups ceiling is checked after conversion.
-  size: z.preprocess(blank, z.number({ error: 'give the batch size' }).gt(0, 'more than 0')),
+  size: z.preprocess(spokenAmount, z.number({ error: 'give the batch size' }).gt(0, 'more than 0')),
   moldId: z.string().optional(),
   baitsExpected: count('the expected count'),
   baits: count('the bait count'),
@@ -54,16 +69,17 @@ export function BatchForm(props: Props) {
   const { data: std, error } = useSWR<PourView>(`/api/pours/${props.standardPourId}`, swrFetcher);
   const { data: molds, error: moldError } = useSWR<Mold[]>('/api/molds', swrFetcher);
   const { data: colorants } = useSWR<Colorant[]>('/api/colorants', swrFetcher);
+  const { data: match } = useSWR<MatchDetail>(`/api/matches/${props.matchId}`, swrFetcher);
   const failed = error ?? moldError;
   if (failed) return <p role="alert" className="text-band-off">Could not load the standard or the molds: {(failed as Error).message}</p>;
   // The form starts from the standard's mold, so its options must be there first.
-  if (!std || !molds || !colorants) return <p role="status" className="text-ink-soft">Loading the standard…</p>;
-  return <BatchFormFields {...props} std={std} molds={molds} bases={colorants.filter((c) => c.kind === 'base')} />;
+  if (!std || !molds || !colorants || !match) return <p role="status" className="text-ink-soft">Loading the standard…</p>;
+  return <BatchFormFields {...props} std={std} molds={molds} bases={colorants.filter((c) => c.kind === 'base')} neutral={match.lastNeutral} />;
 }
 
-function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefill, onLogged, std, molds, bases }: Props & { std: PourView; molds: Mold[]; bases: Colorant[] }) {
+function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefill, onLogged, std, molds, bases, neutral }: Props & { std: PourView; molds: Mold[]; bases: Colorant[]; neutral: NeutralMark | null }) {
   const unit = volumeUnit;
-  const inUnit = (cups: number) => amount(fromCups(cups, unit));
+  const inUnit = (cups: number) => trimmed(fromCups(cups, unit));
   const [zoneSizes, setZoneSizes] = useState<Record<string, string>>(() => Object.fromEntries((prefill?.zoneCups ?? []).map((z) => [z.zone, inUnit(z.cups)])));
   const [plan, setPlan] = useState(prefill?.plan ?? null);
   const [baseId, setBaseId] = useState(bases[0]?.id ?? '');
@@ -77,13 +93,13 @@ function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefi
   });
   const zones = std.zones.map((z) => z.name);
   const missing = zones.filter((z) => !shapes[z]);
-  const cups = toCups(Number(watch('size')), unit);
+  const cups = toCups(typedAmount(watch('size') as string | undefined), unit);
   const mold = molds.find((m) => m.id === watch('moldId'));
   const yieldHint = mold && cups > 0 && cups <= MAX_BATCH_CUPS ? moldYield(cups, mold, sprueAllowanceMl) : null;
   const planBaits = plan?.reduce((s, l) => s + l.shots * (molds.find((m) => m.id === l.moldId)?.cavities ?? 0), 0) ?? null;
   // Each side's cups, when any is typed: all of them, adding up to the batch.
   const typed = zones.some((z) => (zoneSizes[z] ?? '').trim() !== '');
-  const zoneCups = typed ? zones.map((z) => ({ zone: z, cups: toCups(Number(zoneSizes[z] || 0), unit) })) : null;
+  const zoneCups = typed ? zones.map((z) => ({ zone: z, cups: toCups(zoneSizes[z]?.trim() ? typedAmount(zoneSizes[z]) : 0, unit) })) : null;
   const splitError = zoneCups && cups > 0 ? zoneCupsProblem(cups, zones, zoneCups)?.replace(/^zoneCups: /, '').replace(/cups/g, VOLUME_LABEL[unit]) ?? null : null;
   const sizeError = cups > MAX_BATCH_CUPS ? `at most ${inUnit(MAX_BATCH_CUPS)} ${VOLUME_LABEL[unit]} (${MAX_BATCH_CUPS} cups)` : undefined;
 
@@ -99,7 +115,7 @@ function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefi
         body: JSON.stringify({
           photoId: photo.photoId,
           zones: zones.map((name) => ({ name, shape: shapes[name] })),
-          neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL] } : undefined,
+          neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL], ...(neutral?.L ? { L: neutral.L } : {}) } : undefined,
           cups: toCups(v.size, unit),
           zoneCups,
           plan,
@@ -120,8 +136,8 @@ function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefi
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Log a batch" className="space-y-4">
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field label={`Batch size (${VOLUME_LABEL[unit]})`} error={e.size?.message ?? sizeError} hint={unit !== 'cups' && cups > 0 ? `${amount(cups)} cups` : undefined}>
-          <input type="number" inputMode="decimal" step="any" min="0" className={inputClass} {...register('size')} />
+        <Field label={`Batch size (${VOLUME_LABEL[unit]})`} error={e.size?.message ?? sizeError} hint={unit !== 'cups' && cups > 0 ? `${trimmed(cups)} cups` : undefined}>
+          <input type="text" inputMode="decimal" autoComplete="off" className={inputClass} {...register('size')} />
         </Field>
         <Field label="Mold" hint={std.mold ? `The standard was poured in ${std.mold}.` : undefined}>
           <select className={inputClass} {...register('moldId')}>
@@ -160,10 +176,11 @@ function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefi
             width={photo.width}
             height={photo.height}
             zones={zones}
-            initialShapes={Object.fromEntries(std.zones.map((z) => [z.name, z.shape as Shape]))}
+            initialShapes={{ ...Object.fromEntries(std.zones.map((z) => [z.name, z.shape as Shape])), ...(neutral ? { [NEUTRAL]: neutral.shape } : {}) }}
             withNeutral
             onChange={onShapes}
           />
+          <CardCarriedNote neutral={neutral} marked={Boolean(shapes[NEUTRAL])} />
         </>
       ) : (
         <div className="space-y-2">

@@ -3,6 +3,8 @@
 import Link from 'next/link';
 import { useState } from 'react';
 import { DeltaReadout } from '@/components/color/delta-readout';
+import { LightNote } from '@/components/match/light-note';
+import { formatLab } from '@/lib/format';
 import { InFrameLine, LightLine } from '@/components/color/measure-notes';
 import { verdictWords } from '@/components/color/verdict-words';
 import { SurroundToggle, SwatchPair, type Surround } from '@/components/color/swatch-pair';
@@ -11,13 +13,15 @@ import type { BatchView } from '@/db/queries/batches';
 import type { Shape } from '@/lib/color/types';
 import { PassBadge } from './pass-badge';
 import { price } from './sheet-production';
-import { when } from './when';
+import { useShopTimeZone } from '@/components/ui/when';
+import { formatWhen } from '@/lib/format/dates';
 
-const lab = (l: { l: number; a: number; b: number }) => `L* ${l.l.toFixed(1)} a* ${l.a.toFixed(1)} b* ${l.b.toFixed(1)}`;
+const lab = formatLab;
 
 // One production batch against its standard: pass or fail, then per zone the
 // standard and the batch side by side on the stage, with the figures beside.
 export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: () => void }) {
+  const tz = useShopTimeZone();
   const [surround, setSurround] = useState<Surround>('grey');
   const over = batch.zones.filter((z) => !z.withinTolerance).map((z) => z.name);
   return (
@@ -35,7 +39,7 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
           : `Over the tolerance of ${batch.tolerance.toFixed(1)} ΔE00 against standard pour #${batch.standardPourNumber}: ${over.join(', ')}. The leads have been e-mailed.`}
       </p>
       <p className="num text-sm text-ink-soft">
-        {[when(batch.createdAt), batch.createdBy ? `logged by ${batch.createdBy}` : null, batch.mold,
+        {[formatWhen(batch.createdAt, tz), batch.createdBy ? `logged by ${batch.createdBy}` : null, batch.mold,
           batch.baits !== null ? `${batch.baits} baits` : null, batch.baitsExpected !== null ? `${batch.baitsExpected} expected` : null, batch.notes]
           .filter(Boolean).join(' · ')}
       </p>
@@ -57,6 +61,7 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
             <InFrameLine inFrame={z.inFrame as never} />
             <p className="num text-ink-soft">Batch {lab(z.lab)}{z.standard ? ` · standard ${lab(z.standard.lab)}` : ''}</p>
             <LightLine light={z.whiteBalance as never} />
+            <LightNote light={batch.light} />
           </div>
         </div>
       ))}

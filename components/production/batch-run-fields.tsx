@@ -2,7 +2,7 @@
 
 import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
-import { amount, volume } from './dose';
+import { formatVolume, trimmed } from '@/lib/format';
 import { fromCups, VOLUME_LABEL, type VolumeUnit } from '@/lib/recipes';
 
 type Mold = { id: string; name: string; cavities: number };
@@ -27,13 +27,13 @@ export function BatchRunFields(props: {
 }) {
   const { zones, unit, totalCups } = props;
   const evenCups = totalCups && totalCups > 0 ? totalCups / zones.length : null;
-  const even = evenCups ? amount(fromCups(evenCups, unit)) : '';
+  const even = evenCups ? trimmed(fromCups(evenCups, unit)) : '';
   return (
     <div className="space-y-3">
       {zones.length > 1 ? (
         <fieldset className="rounded-md border border-panel-line p-3">
           <legend className="px-1 text-sm font-medium">Each side’s own cup ({VOLUME_LABEL[unit]})</legend>
-          <p className="mb-2 text-sm text-ink-soft">A laminate mixes each colour in its own cup. Leave blank to split the batch evenly{evenCups ? ` (${volume(evenCups, unit)} each)` : ''}.</p>
+          <p className="mb-2 text-sm text-ink-soft">A laminate mixes each colour in its own cup. Leave blank to split the batch evenly{evenCups ? ` (${formatVolume(evenCups, unit)} each)` : ''}.</p>
           <div className="grid grid-cols-2 gap-3">
             {zones.map((z) => (
               <Field key={z} label={`${z[0]!.toUpperCase()}${z.slice(1)}`}>

@@ -1,13 +1,13 @@
 import Link from 'next/link';
 import { SAFETY_CAUTIONS, TEMPERATURE_CAUTION } from '@/lib/batches/safetyCautions';
-import { amount, volume } from './dose';
+import { formatDeltaE, formatLab, formatMl, formatTemp, formatVolume } from '@/lib/format';
 import { SheetCost, SheetPlan, SheetStock } from './sheet-production';
 import { PassBadge } from './pass-badge';
 import { SheetQc } from './sheet-qc';
 import { PrintButton } from './print-button';
 import { type Sheet, SheetMolds, SheetRecipe } from './sheet-tables';
 import { ThicknessRedose } from './thickness-redose';
-import { day } from './when';
+import { When } from '@/components/ui/when';
 
 const box = 'rounded-lg border border-panel-line bg-white p-4';
 
@@ -40,14 +40,14 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
           </div>
         </div>
         <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-4">
-          <Item label="Batch size"><span className="num">{volume(sheet.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${sheet.batchMl.toFixed(0)} mL)`}</span></Item>
+          <Item label="Batch size"><span className="num">{formatVolume(sheet.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${formatMl(sheet.batchMl)})`}</span></Item>
           <Item label="Standard">pour #{sheet.standard.number}</Item>
           <Item label="Mold">{mold ? mold.name : 'not given'}</Item>
           <Item label="Expected yield"><span className="num">{sheet.batch.baitsExpected ?? mold?.baits ?? '—'} baits</span></Item>
           <Item label="Cost per bait"><span className="num">{sheet.cost.perBait === null ? '—' : `${sheet.cost.complete ? '' : '≥ '}${sheet.cost.currency} ${sheet.cost.perBait.toFixed(3)}`}</span></Item>
-          <Item label="Logged"><span className="num">{day(sheet.batch.createdAt)}</span></Item>
+          <Item label="Logged"><span className="num"><When at={sheet.batch.createdAt} dayOnly /></span></Item>
           <Item label="QC against the standard"><PassBadge pass={sheet.batch.pass} /></Item>
-          <Item label="Tolerance"><span className="num">{sheet.match.tolerance.toFixed(1)} ΔE00</span></Item>
+          <Item label="Tolerance"><span className="num">{formatDeltaE(sheet.match.tolerance)} ΔE00</span></Item>
           <Item label="Baits counted"><span className="num">{sheet.batch.baits ?? '____'}</span></Item>
         </dl>
         <SheetQc sheet={sheet} />
@@ -63,7 +63,7 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
         {sheet.tempF === null || sheet.tempC === null ? (
           <p className="text-sm">The standard pour has no temperature recorded.</p>
         ) : (
-          <p className="num text-2xl font-semibold">{amount(sheet.tempF)} °F <span className="font-normal">({sheet.tempC.toFixed(0)} °C)</span></p>
+          <p className="num text-2xl font-semibold">{formatTemp(sheet.tempF)}</p>
         )}
         {sheet.tempNote ? <p className="mt-1 text-sm font-semibold"><span aria-hidden>▲ </span>{sheet.tempNote}</p> : null}
         <p className="mt-1 text-sm">{TEMPERATURE_CAUTION}</p>
@@ -84,8 +84,8 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
               <div className="swatch h-14 rounded-sm border border-stage-rule" style={{ background: l.hex ?? '#777777', ['--swatch' as string]: l.hex ?? '#777777' }} />
               <p className="mt-1 text-sm font-semibold capitalize text-white">{l.zone}</p>
               <p className="text-xs text-white">{layerLabel(l.position, sheet.layout.length)}</p>
-              <p className="num text-sm font-semibold text-white">{volume(l.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${l.ml.toFixed(0)} mL)`}</p>
-              {l.lab ? <p className="num text-xs text-white">L* {l.lab.l.toFixed(1)} a* {l.lab.a.toFixed(1)} b* {l.lab.b.toFixed(1)}</p> : null}
+              <p className="num text-sm font-semibold text-white">{formatVolume(l.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${formatMl(l.ml)})`}</p>
+              {l.lab ? <p className="num text-xs text-white">{formatLab(l.lab)}</p> : null}
             </li>
           ))}
         </ol>

@@ -6,14 +6,15 @@ import useSWR from 'swr';
 import { Button } from '@/components/ui/button';
 import type { BatchView } from '@/db/queries/batches';
 import type { MatchDetail } from '@/db/queries/matchDetail';
+import { formatDeltaE, formatVolume } from '@/lib/format';
 import { swrFetcher } from '@/lib/http/client';
 import { decodeBatchPrefill, type VolumeUnit } from '@/lib/recipes';
 import { BatchForm } from './batch-form';
 import { BatchResult } from './batch-result';
 import { PassBadge } from './pass-badge';
 import { RunChart } from './run-chart';
-import { when } from './when';
-import { volume } from './dose';
+import { When } from '@/components/ui/when';
+import { FocusFirstField } from '@/components/match/match-sections';
 
 type Props = {
   match: MatchDetail;
@@ -22,17 +23,19 @@ type Props = {
   volumeUnit?: VolumeUnit;
   selectedId: string | null;
   onSelect: (batchId: string | null) => void;
+  startLogging?: boolean;
 };
 
 // Production of a match's standard: log a batch, see it pass or fail, the
 // run chart of each standard the match has had, and every batch logged.
-export function MatchBatches({ match, canLog, sprueAllowanceMl, volumeUnit, selectedId, onSelect }: Props) {
+export function MatchBatches({ match, canLog, sprueAllowanceMl, volumeUnit, selectedId, onSelect, startLogging }: Props) {
   const searchParams = useSearchParams();
   const key = `/api/matches/${match.id}/batches`;
   const { data: batches, error, mutate } = useSWR<BatchView[]>(key, swrFetcher);
-  // Arriving from a run plan's "Log as batch": the form opens pre-filled.
+  // The form opens at once when the maker arrives from a run plan's "Log as
+  // batch" (pre-filled) or from "Log a batch" on the Standards or Batches page.
   const [prefill] = useState(() => decodeBatchPrefill(searchParams));
-  const [logging, setLogging] = useState(prefill !== null && canLog);
+  const [logging, setLogging] = useState((prefill !== null || Boolean(startLogging)) && canLog && match.status !== 'archived');
   const section = useRef<HTMLElement>(null);
   const form = useRef<HTMLDivElement>(null);
   useEffect(() => {
@@ -41,19 +44,19 @@ export function MatchBatches({ match, canLog, sprueAllowanceMl, volumeUnit, sele
   const scrolled = useRef(false);
   const selected = batches?.find((b) => b.id === selectedId) ?? null;
 
-  // Arriving from a failed-batch e-mail (?batch=…): bring the batch into view once.
+  // Arriving from a failed-batch e-mail (?batch=…), or to log one: bring the section into view once.
   useEffect(() => {
-    if (selected && !scrolled.current) {
+    if ((selected || logging) && !scrolled.current) {
       scrolled.current = true;
       section.current?.scrollIntoView({ block: 'start' });
     }
-  }, [selected]);
+  }, [selected, logging]);
 
   if (!match.standardPourId) return null;
   const standardIds = [...new Set([match.standardPourId, ...(batches ?? []).map((b) => b.standardPourId).reverse()])];
 
   return (
-    <section ref={section} aria-labelledby="batches-h" className="space-y-3">
+    <section ref={section} id="batches" aria-labelledby="batches-h" className="scroll-mt-16 space-y-3">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <h2 id="batches-h" className="text-lg font-semibold">Production batches</h2>
         {canLog && match.status !== 'archived' && !logging ? <Button onClick={() => setLogging(true)}>Log a batch</Button> : null}
@@ -62,7 +65,8 @@ export function MatchBatches({ match, canLog, sprueAllowanceMl, volumeUnit, sele
         Each batch is checked against the standard (pour #{match.pours.find((p) => p.id === match.standardPourId)?.number}) within {match.tolerance.toFixed(1)} ΔE00 in every zone.
       </p>
       {logging ? (
-        <div ref={form} className="scroll-mt-4 rounded-lg border border-panel-line bg-white p-4">
+        <div ref={form} className="scroll-mt-4">
+        <FocusFirstField className="rounded-lg border border-panel-line bg-white p-4">
           <div className="mb-3 flex items-center justify-between gap-2">
             <h3 className="text-lg font-semibold">Log a batch</h3>
             <Button variant="secondary" onClick={() => setLogging(false)}>Cancel</Button>
@@ -79,6 +83,7 @@ export function MatchBatches({ match, canLog, sprueAllowanceMl, volumeUnit, sele
               onSelect(b.id);
             }}
           />
+        </FocusFirstField>
         </div>
       ) : null}
       {error ? <p role="alert" className="text-band-off">Could not load the batches: {(error as Error).message}</p> : null}
@@ -104,9 +109,9 @@ export function MatchBatches({ match, canLog, sprueAllowanceMl, volumeUnit, sele
                   className={`flex min-h-tap w-full flex-wrap items-center gap-x-4 gap-y-1 rounded-md border px-3 py-2 text-left text-sm ${b.id === selectedId ? 'border-ink bg-white shadow-sm' : 'border-panel-line bg-panel'}`}
                 >
                   <PassBadge pass={b.pass} />
-                  <span className="num">{when(b.createdAt)}</span>
-                  <span className="num">{volume(b.cups, volumeUnit)}{b.mold ? ` · ${b.mold}` : ''}</span>
-                  <span className="num">{b.zones.map((z) => `${z.name} ${z.dE00.toFixed(1)} ΔE00`).join(' · ')}</span>
+                  <span className="num"><When at={b.createdAt} /></span>
+                  <span className="num">{formatVolume(b.cups, volumeUnit)}{b.mold ? ` · ${b.mold}` : ''}</span>
+                  <span className="num">{b.zones.map((z) => `${z.name} ${formatDeltaE(z.dE00)} ΔE00`).join(' · ')}</span>
                 </button>
               </li>
             ))}

@@ -2,7 +2,7 @@ import Link from 'next/link';
 import { BandBadge } from '@/components/color/band-badge';
 import type { BatchView } from '@/db/queries/batches';
 import { PassBadge } from './pass-badge';
-import { when } from './when';
+import { When } from '@/components/ui/when';
 
 const linkClass = 'inline-flex min-h-tap items-center rounded-md border border-panel-line bg-white px-3 font-medium';
 
@@ -26,7 +26,7 @@ export function RecentBatches({ batches }: { batches: BatchView[] }) {
             <Link href={`/matches/${b.matchId}?batch=${b.id}`} className="inline-flex min-h-tap items-center font-semibold underline decoration-panel-line underline-offset-4">
               {b.matchName}
             </Link>
-            <span className="num text-sm text-ink-soft">{when(b.createdAt)}</span>
+            <span className="num text-sm text-ink-soft"><When at={b.createdAt} /></span>
           </div>
           <p className="num mt-1 text-sm">
             {[`standard pour #${b.standardPourNumber}`, `${b.cups} cups`, b.mold, b.baits !== null ? `${b.baits} baits` : null,

@@ -2,7 +2,8 @@
 
 import { CartesianGrid, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { BatchView } from '@/db/queries/batches';
-import { day } from './when';
+import { useShopTimeZone } from '@/components/ui/when';
+import { formatDay } from '@/lib/format/dates';
 
 // The same muted strokes and dashes as the pour chart (delta-chart.tsx), so
 // colour is never the only cue; the tolerance is a dashed rule.
@@ -12,9 +13,10 @@ const DASHES = ['', '6 3', '2 3', '8 3 2 3', '1 2'];
 // A run chart of one standard: ΔE00 per zone against the standard, batch
 // after batch in the order they were logged, with the tolerance line.
 export function RunChart({ batches, zones, tolerance, title }: { batches: BatchView[]; zones: string[]; tolerance: number; title: string }) {
+  const tz = useShopTimeZone();
   if (batches.length === 0) return null;
   const data = batches.map((b, i) => {
-    const row: Record<string, number | string | null> = { run: i + 1, day: day(b.createdAt), pass: b.pass ? 'pass' : 'fail' };
+    const row: Record<string, number | string | null> = { run: i + 1, day: formatDay(b.createdAt, tz), pass: b.pass ? 'pass' : 'fail' };
     for (const z of b.zones) row[z.name] = Number(z.dE00.toFixed(2));
     return row;
   });

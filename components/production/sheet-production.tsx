@@ -1,6 +1,6 @@
 import { money } from '@/components/library/format';
 import { ML_PER_CUP } from '@/lib/recipes/units';
-import { amount, unitLabel, volume } from './dose';
+import { formatVolume, trimmed, unitLabel } from '@/lib/format';
 import type { Sheet } from './sheet-tables';
 
 const th = 'border-b border-panel-line p-2 text-left font-semibold';
@@ -19,7 +19,7 @@ export function SheetPlan({ sheet }: { sheet: Sheet }) {
         <tbody>
           {plan.molds.map((m) => (
             <tr key={m.id}>
-              <td className={td}>{m.name}<span className="block text-xs">{m.cavities} × {m.mlPerCavity.toFixed(1)} mL{sheet.sprueAllowanceMl ? ` + ${amount(sheet.sprueAllowanceMl)} mL sprue` : ''} per shot</span></td>
+              <td className={td}>{m.name}<span className="block text-xs">{m.cavities} × {m.mlPerCavity.toFixed(1)} mL{sheet.sprueAllowanceMl ? ` + ${trimmed(sheet.sprueAllowanceMl)} mL sprue` : ''} per shot</span></td>
               <td className={`${td} num text-right text-base font-semibold`}>{m.shots}</td>
               <td className={`${td} num text-right`}>{m.baits}</td>
               <td className={`${td} num text-right`}>{m.ml.toFixed(0)} mL</td>
@@ -32,7 +32,7 @@ export function SheetPlan({ sheet }: { sheet: Sheet }) {
       <p className="mt-1 text-sm">
         {plan.shortMl > 0
           ? <span className="font-semibold"><span aria-hidden>▲ </span>The batch is {plan.shortMl.toFixed(0)} mL short of the plan: mix more or pour fewer shots.</span>
-          : `Left over after the plan: ${plan.leftoverMl.toFixed(0)} mL (${volume(plan.leftoverMl / ML_PER_CUP, sheet.volumeUnit)}).`}
+          : `Left over after the plan: ${plan.leftoverMl.toFixed(0)} mL (${formatVolume(plan.leftoverMl / ML_PER_CUP, sheet.volumeUnit)}).`}
         {' '}Sprue: {plan.sprueMl.toFixed(0)} mL of the total.
       </p>
     </div>
@@ -62,7 +62,7 @@ export function SheetStock({ sheet }: { sheet: Sheet }) {
     <div className="text-sm">
       <ul className="num">
         {sheet.stock.map((m) => (
-          <li key={m.colorantId}>{m.name}: {amount(-m.amount)} {unitLabel(m.unit)} out, {amount(m.balance)} {unitLabel(m.unit)} left{m.balance < 0 ? ' — below zero' : ''}</li>
+          <li key={m.colorantId}>{m.name}: {trimmed(-m.amount)} {unitLabel(m.unit)} out, {trimmed(m.balance)} {unitLabel(m.unit)} left{m.balance < 0 ? ' — below zero' : ''}</li>
         ))}
       </ul>
       {sheet.belowZero.length ? <p className="mt-1 font-semibold"><span aria-hidden>▲ </span>Stock went below zero for {sheet.belowZero.join(', ')}: count the shelf and record a delivery or an adjustment.</p> : null}

@@ -1,5 +1,5 @@
 import type { loadBatchSheet } from '@/lib/batches/loadBatchSheet';
-import { amount, dose, unitLabel, volume } from './dose';
+import { formatDose, formatMl, formatVolume, trimmed, unitLabel } from '@/lib/format';
 
 export type Sheet = ReturnType<typeof loadBatchSheet>;
 const th = 'border-b border-panel-line p-2 text-left font-semibold';
@@ -16,7 +16,7 @@ export function SheetRecipe({ sheet }: { sheet: Sheet }) {
     <div className="space-y-3">
       {sheet.layout.map((layer) => (
         <div key={layer.zone} className="sheet-keep overflow-x-auto">
-          <h3 className="font-semibold"><span className="capitalize">{layer.zone}</span> <span className="num font-normal">— {sheet.laminate ? 'its own cup: ' : 'for '}{volume(layer.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${layer.ml.toFixed(0)} mL)`} of plastisol</span></h3>
+          <h3 className="font-semibold"><span className="capitalize">{layer.zone}</span> <span className="num font-normal">— {sheet.laminate ? 'its own cup: ' : 'for '}{formatVolume(layer.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${formatMl(layer.ml)})`} of plastisol</span></h3>
           {layer.recipe.length === 0 ? (
             <p className="text-sm">No colorants recorded for this layer: plain plastisol.</p>
           ) : (
@@ -31,9 +31,9 @@ export function SheetRecipe({ sheet }: { sheet: Sheet }) {
                 {layer.recipe.map((l, i) => (
                   <tr key={`${l.colorantId}-${i}`}>
                     <td className={td}>{l.colorant}</td>
-                    <td className={`${td} num text-right text-base font-semibold`}>{dose(l.total, l.unit)}</td>
-                    <td className={`${td} num text-right`}>{amount(l.perCup)} {unitLabel(l.unit)}</td>
-                    <td className={`${td} num text-right`}>{l.unit === 'ml' ? '' : l.approxMl === null ? 'by weight' : `≈ ${l.approxMl.toFixed(2)} mL`}</td>
+                    <td className={`${td} num text-right text-base font-semibold`}>{formatDose(l.total, l.unit)}</td>
+                    <td className={`${td} num text-right`}>{formatDose(l.perCup, l.unit)}</td>
+                    <td className={`${td} num text-right`}>{l.unit === 'ml' ? '' : l.approxMl === null ? 'by weight' : `≈ ${formatMl(l.approxMl)}`}</td>
                     <td className={`${td} ${paper} text-center`}><span aria-hidden className="inline-block h-4 w-4 border border-ink" /></td>
                   </tr>
                 ))}
@@ -42,7 +42,7 @@ export function SheetRecipe({ sheet }: { sheet: Sheet }) {
           )}
         </div>
       ))}
-      <p className="text-xs">Drops counted at {amount(sheet.dropsPerMl)} drops per mL (the shop’s dropper setting); 1 tsp = 1/48 cup = 4.93 mL; 1 cup = 236.59 mL.</p>
+      <p className="text-xs">Drops counted at {trimmed(sheet.dropsPerMl, 1)} drops per mL (the shop’s dropper setting); 1 tsp = 1/48 cup = 4.93 mL; 1 cup = 236.59 mL.</p>
     </div>
   );
 }
@@ -60,17 +60,17 @@ export function SheetMolds({ sheet }: { sheet: Sheet }) {
           {sheet.molds.map((m) => (
             <tr key={m.id} className={m.selected ? 'font-semibold' : undefined}>
               <td className={td}>{m.selected ? <span aria-hidden>► </span> : null}{m.name}{m.selected ? ' (this batch)' : ''}<span className="block text-xs font-normal">{m.thickness} body · {m.cavities} cavities</span></td>
-              <td className={`${td} ${wide} num text-right`}>{m.cavities} × {m.mlPerCavity.toFixed(1)} mL</td>
-              <td className={`${td} num text-right`}>{m.mlPerShot === null ? '—' : `${m.mlPerShot.toFixed(1)} mL`}</td>
+              <td className={`${td} ${wide} num text-right`}>{m.cavities} × {formatMl(m.mlPerCavity)}</td>
+              <td className={`${td} num text-right`}>{m.mlPerShot === null ? '—' : formatMl(m.mlPerShot)}</td>
               <td className={`${td} num text-right`}>{m.shots ?? '—'}</td>
               <td className={`${td} num text-right`}>{m.baits ?? '—'}</td>
-              <td className={`${td} ${wide} num text-right`}>{m.leftoverMl === null ? '—' : `${m.leftoverMl.toFixed(0)} mL`}</td>
+              <td className={`${td} ${wide} num text-right`}>{m.leftoverMl === null ? '—' : formatMl(m.leftoverMl)}</td>
             </tr>
           ))}
         </tbody>
       </table>
       <p className="mt-1 text-xs">
-        Yield = batch volume ÷ (mL per cavity × cavities{sheet.sprueAllowanceMl ? ` + ${amount(sheet.sprueAllowanceMl)} mL sprue` : ''}), full shots only.
+        Yield = batch volume ÷ (mL per cavity × cavities{sheet.sprueAllowanceMl ? ` + ${formatMl(sheet.sprueAllowanceMl)} sprue` : ''}), full shots only.
       </p>
     </div>
   );

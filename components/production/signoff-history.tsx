@@ -3,7 +3,7 @@
 import useSWR from 'swr';
 import type { HistoryEntry } from '@/db/queries/history';
 import { swrFetcher } from '@/lib/http/client';
-import { when } from './when';
+import { When } from '@/components/ui/when';
 
 const KIND: Record<HistoryEntry['kind'], { icon: string; word: string }> = {
   submitted: { icon: '◐', word: 'submitted for sign-off' },
@@ -29,7 +29,7 @@ export function SignOffHistory({ matchId }: { matchId: string }) {
               <p>
                 <span aria-hidden className="mr-1">{KIND[h.kind].icon}</span>
                 <span className="font-semibold">Pour #{h.pourNumber} {KIND[h.kind].word}</span>
-                <span className="text-ink-soft"> by {h.by?.name || 'a former member'} · <time dateTime={new Date(h.at).toISOString()}>{when(h.at)}</time></span>
+                <span className="text-ink-soft"> by {h.by?.name || 'a former member'} · <When at={h.at} /></span>
               </p>
               {h.comment ? <p className="mt-0.5 whitespace-pre-line break-words pl-5">“{h.comment}”</p> : null}
               {h.retiredPourId ? <p className="pl-5 text-ink-soft">Replaced the earlier standard, which is now retired.</p> : null}

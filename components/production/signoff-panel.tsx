@@ -1,12 +1,13 @@
 'use client';
 
 import { useId, useState } from 'react';
-import { useSWRConfig } from 'swr';
+import useSWR, { useSWRConfig } from 'swr';
 import { Button } from '@/components/ui/button';
 import { inputClass } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
 import type { MatchDetail } from '@/db/queries/matchDetail';
-import { apiFetch } from '@/lib/http/client';
+import type { PourView } from '@/db/queries/pours';
+import { apiFetch, swrFetcher } from '@/lib/http/client';
 import { MAX_COMMENT } from '@/lib/validations/production';
 import { SignOffHistory } from './signoff-history';
 
@@ -25,7 +26,17 @@ export function SignOffPanel({ match, pourId, canSubmit, canDecide }: Props) {
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState<null | 'submit' | 'approved' | 'rework'>(null);
   const textId = useId();
+  // The same key as the comparison above, so this costs no extra request.
+  const { data: detail } = useSWR<PourView>(`/api/pours/${pourId}`, swrFetcher);
   if (!pour) return null;
+  // The server refuses both too (409 no_recipe); saying so first saves a wasted press.
+  const noRecipe = detail !== undefined && detail.recipe.length === 0;
+  const whyId = `${textId}-why`;
+  const why = noRecipe ? (
+    <p id={whyId} className="text-sm font-medium text-band-off">
+      ⚠ This pour has no recipe lines, so it cannot become the standard: log a new pour with the doses you mixed.
+    </p>
+  ) : null;
 
   const matchOpen = match.status === 'open' || match.status === 'approved';
   const showSubmit = canSubmit && matchOpen && SUBMITTABLE.has(pour.status);
@@ -43,7 +54,7 @@ export function SignOffPanel({ match, pourId, canSubmit, canDecide }: Props) {
         await apiFetch(`/api/pours/${pourId}/sign-off`, { method: 'POST', body: JSON.stringify({ decision: action, comment: comment || null }) });
       }
       setText('');
-      await Promise.all([mutate(`/api/matches/${match.id}`), mutate(`/api/pours/${pourId}`), mutate(`/api/matches/${match.id}/history`)]);
+      await Promise.all([mutate('/api/sign-off-queue'), mutate(`/api/matches/${match.id}`), mutate(`/api/pours/${pourId}`), mutate(`/api/matches/${match.id}/history`)]);
     } catch (e) {
       setError((e as Error).message);
     } finally {
@@ -61,7 +72,8 @@ export function SignOffPanel({ match, pourId, canSubmit, canDecide }: Props) {
           <label htmlFor={textId} className="block text-sm font-medium">Note for the lead (optional)</label>
           <textarea id={textId} rows={2} maxLength={MAX_COMMENT} value={text} onChange={(e) => setText(e.target.value)} className={`${inputClass} py-2`} placeholder="e.g. shot under the bench lamp with the grey card" />
           <FormError message={error} />
-          <Button type="submit" disabled={busy !== null}>{busy ? 'Submitting…' : 'Submit for sign-off'}</Button>
+          {why}
+          <Button type="submit" disabled={busy !== null || noRecipe} aria-describedby={noRecipe ? whyId : undefined}>{busy ? 'Submitting…' : 'Submit for sign-off'}</Button>
         </form>
       ) : null}
 
@@ -81,8 +93,9 @@ export function SignOffPanel({ match, pourId, canSubmit, canDecide }: Props) {
             Optional to approve. Required to send back: say what to change (which zone, which way, how much).
           </p>
           <FormError message={error} />
+          {why}
           <div className="flex flex-wrap gap-2">
-            <Button type="button" onClick={() => void send('approved')} disabled={busy !== null}>
+            <Button type="button" onClick={() => void send('approved')} disabled={busy !== null || noRecipe} aria-describedby={noRecipe ? whyId : undefined}>
               {busy === 'approved' ? 'Approving…' : 'Approve as standard'}
             </Button>
             <Button type="button" variant="secondary" onClick={() => void send('rework')} disabled={busy !== null}>

@@ -2,10 +2,10 @@ import Link from 'next/link';
 import { StatusBadge } from '@/components/match/status-badge';
 import type { StandardView as StandardRow } from '@/db/queries/standards';
 import type { BatchCost } from '@/lib/recipes';
+import { formatDose, formatLab, formatTemp } from '@/lib/format';
 import { price } from './sheet-production';
-import { dose } from './dose';
 import { PassBadge } from './pass-badge';
-import { day } from './when';
+import { When } from '@/components/ui/when';
 
 type StandardView = StandardRow & { cost?: BatchCost & { currency: string } };
 
@@ -13,7 +13,7 @@ const linkClass = 'inline-flex min-h-tap items-center rounded-md border border-p
 
 // The team's approved colours: per standard, its zones on the grey stage with
 // their Lab, the recipe per cup, the tolerance and how its batches have gone.
-export function StandardsList({ standards }: { standards: StandardView[] }) {
+export function StandardsList({ standards, canLog = false }: { standards: StandardView[]; canLog?: boolean }) {
   if (standards.length === 0) {
     return <p className="rounded-lg border border-panel-line bg-white p-4 text-ink-soft">No standards yet. When a lead approves a submitted pour on its match page, its colour and recipe become the match’s standard and show here.</p>;
   }
@@ -27,18 +27,23 @@ export function StandardsList({ standards }: { standards: StandardView[] }) {
                 <Link href={`/matches/${s.matchId}?pour=${s.standardPourId}`} className="inline-flex min-h-tap items-center underline decoration-panel-line underline-offset-4">{s.name}</Link>
               </h2>
               <StatusBadge status={s.status} />
+              {canLog ? (
+                <Link href={`/matches/${s.matchId}?log=batch#batches`} className="ml-auto inline-flex min-h-tap items-center rounded-md bg-accent px-4 font-medium text-white hover:bg-accent-strong">
+                  Log a batch<span className="sr-only"> of {s.name}</span>
+                </Link>
+              ) : null}
             </header>
             <p className="text-sm text-ink-soft">
               Standard: pour #{s.standardPourNumber}
               {s.approvedBy ? ` · approved by ${s.approvedBy}` : ''}
-              {s.approvedAt ? ` on ${day(s.approvedAt)}` : ''}
+              {s.approvedAt ? <> on <When at={s.approvedAt} dayOnly /></> : ''}
             </p>
             <ul aria-label={`${s.name} colours`} className="flex flex-wrap gap-4 rounded-md bg-stage p-4">
               {s.zones.map((z) => (
                 <li key={z.name} className="w-32 sm:w-36">
                   <div className="h-20 rounded-sm border border-stage-rule" style={{ background: z.hex }} />
                   <p className="mt-1 text-sm font-semibold capitalize text-white">{z.name}</p>
-                  <p className="num text-xs text-white">L* {z.lab.l.toFixed(1)} a* {z.lab.a.toFixed(1)} b* {z.lab.b.toFixed(1)}</p>
+                  <p className="num text-xs text-white">{formatLab(z.lab)}</p>
                 </li>
               ))}
             </ul>
@@ -47,7 +52,7 @@ export function StandardsList({ standards }: { standards: StandardView[] }) {
               <Figure label="Batches"><span className="num">{s.batchCount}</span></Figure>
               <Figure label="Last batch">
                 {s.lastBatch ? (
-                  <span className="flex flex-wrap items-center gap-2"><PassBadge pass={s.lastBatch.pass} /><span className="num">{day(s.lastBatch.createdAt)}</span></span>
+                  <span className="flex flex-wrap items-center gap-2"><PassBadge pass={s.lastBatch.pass} /><span className="num"><When at={s.lastBatch.createdAt} dayOnly /></span></span>
                 ) : (
                   'none yet'
                 )}
@@ -59,7 +64,7 @@ export function StandardsList({ standards }: { standards: StandardView[] }) {
                 </Figure>
               ) : null}
               <Figure label="Temperature">
-                <span className="num">{s.tempF === null ? 'not recorded' : `${s.tempF} °F (${(((s.tempF - 32) * 5) / 9).toFixed(0)} °C)`}</span>
+                <span className="num">{s.tempF === null ? 'not recorded' : formatTemp(s.tempF)}</span>
               </Figure>
             </dl>
             <div>
@@ -74,7 +79,7 @@ export function StandardsList({ standards }: { standards: StandardView[] }) {
                       <dd>
                         <ul>
                           {s.recipe.filter((r) => r.zone === zone).map((l, i) => (
-                            <li key={`${l.colorantId}-${i}`}><span className="num font-medium">{dose(l.amount, l.unit)}</span> {l.colorant}</li>
+                            <li key={`${l.colorantId}-${i}`}><span className="num font-medium">{formatDose(l.amount, l.unit)}</span> {l.colorant}</li>
                           ))}
                         </ul>
                       </dd>

@@ -3,10 +3,12 @@
 import { useEffect, useRef, useState } from 'react';
 import { useStore } from 'zustand';
 import type { Shape } from '@/lib/color/types';
-import { shapeFromDrag, shapeLabelPoint, shapePath, toNormalised } from './geometry';
+import { formatLab } from '@/lib/format';
+import { defaultShape, describeShape, moveShape, resizeShape, shapeFromDrag, shapeLabelPoint, shapePath, toNormalised } from './geometry';
 import { createSamplerStore, NEUTRAL } from './sampler-store';
 import { SamplerToolbar } from './sampler-toolbar';
 import { useLivePreview } from './use-live-preview';
+import { useZoomGestures } from './use-zoom-gestures';
 
 export { NEUTRAL };
 
@@ -31,12 +33,32 @@ export function PhotoSampler({ src, width, height, zones, initialShapes, withNeu
   const [drag, setDrag] = useState<{ from: [number, number]; to: [number, number] } | null>(null);
   const panFrom = useRef<{ x: number; y: number } | null>(null);
   const previews = useLivePreview(src, s.shapes);
+  const stage = useRef<HTMLDivElement>(null);
+  const photo = useRef<HTMLImageElement>(null);
+  const gestures = useZoomGestures(stage, store);
+  const [fitScale, setFitScale] = useState<number | null>(null);
+  const [said, setSaid] = useState('');
+  // The photo's size on screen at "fit", against its own pixels: the true zoom.
+  useEffect(() => {
+    const img = photo.current;
+    if (!img) return;
+    const measure = () => setFitScale(img.offsetWidth > 0 ? img.offsetWidth / width : null);
+    measure();
+    const ro = new ResizeObserver(measure);
+    ro.observe(img);
+    return () => ro.disconnect();
+  }, [width]);
 
   useEffect(() => onChange(s.shapes), [s.shapes, onChange]);
 
   const onPointerDown = (e: React.PointerEvent<SVGSVGElement>) => {
     if (!surface.current) return;
     e.currentTarget.setPointerCapture(e.pointerId);
+    if (gestures.down(e)) {
+      setDrag(null);
+      panFrom.current = null;
+      return;
+    }
     if (s.tool === 'pan') panFrom.current = { x: e.clientX, y: e.clientY };
     else if (s.tool === 'polygon') s.addDraftPoint(toNormalised(surface.current, e.clientX, e.clientY));
     else {
@@ -45,14 +67,15 @@ export function PhotoSampler({ src, width, height, zones, initialShapes, withNeu
     }
   };
   const onPointerMove = (e: React.PointerEvent<SVGSVGElement>) => {
-    if (!surface.current) return;
+    if (!surface.current || gestures.move(e)) return;
     if (panFrom.current) {
       s.panBy(e.clientX - panFrom.current.x, e.clientY - panFrom.current.y);
       panFrom.current = { x: e.clientX, y: e.clientY };
     } else if (drag) setDrag({ ...drag, to: toNormalised(surface.current, e.clientX, e.clientY) });
   };
-  const onPointerUp = () => {
+  const onPointerUp = (e: React.PointerEvent<SVGSVGElement>) => {
     panFrom.current = null;
+    if (gestures.up(e)) return setDrag(null);
     if (drag && (s.tool === 'rect' || s.tool === 'ellipse')) {
       const shape = shapeFromDrag(s.tool, drag.from, drag.to);
       if (shape) s.setShape(s.selected, shape);
@@ -61,26 +84,51 @@ export function PhotoSampler({ src, width, height, zones, initialShapes, withNeu
   };
   const dragShape = drag && (s.tool === 'rect' || s.tool === 'ellipse') ? shapeFromDrag(s.tool, drag.from, drag.to) : null;
   const labelOf = (zone: string) => (zone === NEUTRAL ? 'grey card' : zone);
+  // Keyboard drawing: Enter places a region for the selected zone, arrows move
+  // it, Shift+arrows resize it (Alt for fine steps); each change is announced.
+  const onKeyDown = (e: React.KeyboardEvent<SVGSVGElement>) => {
+    const current = s.shapes[s.selected];
+    const step = e.altKey ? 0.002 : 0.01;
+    let next: typeof current | null = null;
+    if (e.key === 'Enter' || e.key === ' ') next = current ?? defaultShape(s.tool);
+    else if (current && e.key.startsWith('Arrow')) {
+      const dx = e.key === 'ArrowLeft' ? -step : e.key === 'ArrowRight' ? step : 0;
+      const dy = e.key === 'ArrowUp' ? -step : e.key === 'ArrowDown' ? step : 0;
+      next = e.shiftKey ? resizeShape(current, dx, dy) : moveShape(current, dx, dy);
+    } else if (current && (e.key === 'Delete' || e.key === 'Backspace')) {
+      e.preventDefault();
+      s.setShape(s.selected, null);
+      setSaid(`${labelOf(s.selected)} cleared`);
+      return;
+    }
+    if (!next) return;
+    e.preventDefault();
+    s.setShape(s.selected, next);
+    setSaid(`${labelOf(s.selected)}: ${describeShape(next)}`);
+  };
 
   return (
     <div className="space-y-3">
-      <SamplerToolbar store={store} zones={zones} withNeutral={withNeutral} />
-      <div className="overflow-hidden rounded-md bg-stage p-3" data-testid="sampler-stage">
+      <SamplerToolbar store={store} zones={zones} withNeutral={withNeutral} fitScale={fitScale} />
+      <div ref={stage} className="overflow-hidden rounded-md bg-stage p-3" data-testid="sampler-stage">
         <div className="relative mx-auto w-full" style={{ maxWidth: `min(100%, ${Math.round((width / height) * 70)}vh)` }}>
           <div style={{ transform: `translate(${s.panX}px, ${s.panY}px) scale(${s.zoom})`, transformOrigin: 'center' }} className="relative">
             {/* eslint-disable-next-line @next/next/no-img-element */}
-            <img src={src} alt="Photo being sampled" className="block h-auto w-full select-none" draggable={false} width={width} height={height} />
+            <img ref={photo} src={src} alt="Photo being sampled" className="block h-auto w-full select-none" draggable={false} width={width} height={height} />
             <svg
               ref={surface}
               viewBox="0 0 1 1"
               preserveAspectRatio="none"
-              className={`absolute inset-0 h-full w-full touch-none ${s.tool === 'pan' ? 'cursor-grab' : 'cursor-crosshair'}`}
+              className={`absolute inset-0 h-full w-full touch-none focus:outline focus:outline-4 focus:outline-accent ${s.tool === 'pan' ? 'cursor-grab' : 'cursor-crosshair'}`}
               onPointerDown={onPointerDown}
               onPointerMove={onPointerMove}
               onPointerUp={onPointerUp}
+              onPointerCancel={onPointerUp}
               onDoubleClick={() => s.draft.length >= 3 && s.setShape(s.selected, { type: 'polygon', points: s.draft })}
+              onKeyDown={onKeyDown}
+              tabIndex={0}
               role="img"
-              aria-label="Drawing surface: drag to draw the selected zone"
+              aria-label={`Drawing surface: drag to draw the selected zone (${labelOf(s.selected)}), or press Enter to place it, arrow keys to move it and Shift with the arrows to resize it`}
             >
               {Object.entries(s.shapes).map(([zone, shape]) => (
                 <g key={zone}>
@@ -102,6 +150,8 @@ export function PhotoSampler({ src, width, height, zones, initialShapes, withNeu
           </div>
         </div>
       </div>
+      <p className="sr-only" aria-live="polite" data-testid="sampler-announce">{said}</p>
+      <p className="text-xs text-ink-soft">Pinch or use the mouse wheel over the photo to zoom. Keyboard: Tab to the photo, Enter places the selected zone, arrows move it, Shift + arrows resize it.</p>
       <ul className="grid gap-2 sm:grid-cols-2" aria-label="Live preview">
         {[...zones, ...(withNeutral ? [NEUTRAL] : [])].map((zone) => {
           const p = previews[zone];
@@ -111,7 +161,7 @@ export function PhotoSampler({ src, width, height, zones, initialShapes, withNeu
               <span>
                 <span className="block font-medium">{labelOf(zone)}</span>
                 <span className="num block text-ink-soft">
-                  {p ? `preview L* ${p.lab.l.toFixed(1)} a* ${p.lab.a.toFixed(1)} b* ${p.lab.b.toFixed(1)}` : 'not marked yet'}
+                  {p ? `preview ${formatLab(p.lab)}` : 'not marked yet'}
                 </span>
               </span>
             </li>

@@ -1,7 +1,7 @@
 'use client';
 
 import { useStore } from 'zustand';
-import { MAX_ZOOM, NEUTRAL, type SamplerStore, type Tool } from './sampler-store';
+import { MAX_ZOOM, MIN_ZOOM, NEUTRAL, type SamplerStore, type Tool } from './sampler-store';
 import { polygonFromDraft } from './geometry';
 
 const TOOLS: { id: Tool; label: string }[] = [
@@ -14,7 +14,15 @@ const TOOLS: { id: Tool; label: string }[] = [
 const chip = (on: boolean) =>
   `min-h-tap rounded-md border px-3 text-sm font-medium ${on ? 'border-accent bg-accent text-white' : 'border-panel-line bg-white text-ink hover:bg-panel'}`;
 
-export function SamplerToolbar({ store, zones, withNeutral }: { store: SamplerStore; zones: string[]; withNeutral: boolean }) {
+// The zoom read-out tells the truth: "fit" while the photo is fitted to the
+// stage, and otherwise the share of the photo's own pixels shown per screen pixel.
+export function zoomReadout(zoom: number, fitScale: number | null): string {
+  const real = fitScale === null ? null : `${Math.round(zoom * fitScale * 100)} %`;
+  if (zoom <= 1.0001) return real ? `fit (${real})` : 'fit';
+  return real ?? `${zoom.toFixed(1)} × fit`;
+}
+
+export function SamplerToolbar({ store, zones, withNeutral, fitScale = null }: { store: SamplerStore; zones: string[]; withNeutral: boolean; fitScale?: number | null }) {
   const s = useStore(store);
   const targets = withNeutral ? [...zones, NEUTRAL] : zones;
   const finishPolygon = () => {
@@ -40,10 +48,12 @@ export function SamplerToolbar({ store, zones, withNeutral }: { store: SamplerSt
           ))}
         </div>
         <div role="group" aria-label="Zoom" className="flex gap-2">
-          <button type="button" className={chip(false)} onClick={() => s.setZoom(s.zoom / 1.5)} aria-label="Zoom out">−</button>
-          <span className="num flex min-w-14 items-center justify-center text-sm">{Math.round(s.zoom * 100)} %</span>
-          <button type="button" className={chip(false)} onClick={() => s.setZoom(s.zoom * 1.5)} disabled={s.zoom >= MAX_ZOOM} aria-label="Zoom in">+</button>
-          <button type="button" className={chip(false)} onClick={s.resetView}>Fit</button>
+          <button type="button" className={`${chip(false)} min-w-tap text-lg`} onClick={() => s.setZoom(s.zoom / 1.5)} disabled={s.zoom <= MIN_ZOOM} aria-label="Zoom out">−</button>
+          <span className="num flex min-w-20 items-center justify-center text-sm" aria-live="polite" data-testid="zoom-readout">
+            <span className="sr-only">Zoom: </span>{zoomReadout(s.zoom, fitScale)}
+          </span>
+          <button type="button" className={`${chip(false)} min-w-tap text-lg`} onClick={() => s.setZoom(s.zoom * 1.5)} disabled={s.zoom >= MAX_ZOOM} aria-label="Zoom in">+</button>
+          <button type="button" className={`${chip(false)} min-w-tap`} onClick={s.resetView}>Fit</button>
         </div>
         {s.tool === 'polygon' ? (
           <button type="button" className={chip(false)} onClick={finishPolygon} disabled={s.draft.length < 3}>

@@ -6,9 +6,9 @@ import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { VOLUME_LABEL, VOLUME_UNITS } from '@/lib/recipes/units';
 
-type Settings = { defaultTolerance: number; volumeUnit: string; dropsPerMl: number; sprueAllowanceMl: number; currency: string; stockDrawsPours: boolean };
+type Settings = { defaultTolerance: number; volumeUnit: string; dropsPerMl: number; sprueAllowanceMl: number; currency: string; stockDrawsPours: boolean; timeZone: string };
 
-export function SettingsForm({ settings, action }: { settings: Settings; action: (p: SettingsState, f: FormData) => Promise<SettingsState> }) {
+export function SettingsForm({ settings, timeZones, action }: { settings: Settings; timeZones: string[]; action: (p: SettingsState, f: FormData) => Promise<SettingsState> }) {
   const [state, formAction, pending] = useActionState(action, null);
   const err = state?.fieldErrors ?? {};
   return (
@@ -26,6 +26,11 @@ export function SettingsForm({ settings, action }: { settings: Settings; action:
       </Field>
       <Field label="Sprue allowance per shot (mL)" error={err.sprueAllowanceMl} hint="Plastisol lost to the sprue and runners each time the mold is filled.">
         <input name="sprueAllowanceMl" type="number" step="0.5" defaultValue={settings.sprueAllowanceMl} className={inputClass} />
+      </Field>
+      <Field label="Shop time zone" error={err.timeZone} hint="Dates on every page and printed sheet read in it.">
+        <select name="timeZone" defaultValue={settings.timeZone} className={inputClass}>
+          {timeZones.map((z) => <option key={z} value={z}>{z.replaceAll('_', ' ')}</option>)}
+        </select>
       </Field>
       <Field label="Currency" error={err.currency} hint="Three-letter code (USD, EUR, CAD…); colorant and plastisol costs are in it.">
         <input name="currency" type="text" maxLength={3} autoCapitalize="characters" defaultValue={settings.currency} className={inputClass} />

@@ -2,11 +2,13 @@
 
 import { useState } from 'react';
 import useSWR from 'swr';
-import type { PhotoView } from '@/db/queries/photos';
+import type { PhotoListItem } from '@/db/queries/photos';
+import { When } from '@/components/ui/when';
 import { swrFetcher } from '@/lib/http/client';
 import { formatBytes, PHOTO_ENDPOINTS, type PhotoEndpoint } from '@/lib/uploads/limits';
 import { PhotoDropzone } from './photo-dropzone';
 import { PhotoOnStage } from './photo-on-stage';
+import { PhotoMatchLine, ReuseAsReference } from './photo-match-link';
 
 const KIND_LABELS: Record<PhotoEndpoint, string> = {
   referencePhoto: 'Reference',
@@ -18,7 +20,7 @@ const KIND_LABELS: Record<PhotoEndpoint, string> = {
 // The team's recent photos, with a dropzone for makers and up (the server decides anyway).
 export function PhotosBoard({ canUpload }: { canUpload: boolean }) {
   const [endpoint, setEndpoint] = useState<PhotoEndpoint>('referencePhoto');
-  const { data, error, isLoading, mutate } = useSWR<PhotoView[]>('/api/photos', swrFetcher);
+  const { data, error, isLoading, mutate } = useSWR<PhotoListItem[]>('/api/photos', swrFetcher);
 
   return (
     <div className="space-y-6">
@@ -61,8 +63,10 @@ export function PhotosBoard({ canUpload }: { canUpload: boolean }) {
                 <div className="space-y-0.5 p-3 text-sm">
                   <p className="break-all font-medium">{p.fileName}</p>
                   <p className="num text-ink-soft">
-                    {p.kind} · {p.width} × {p.height} px · {formatBytes(p.size)} · {new Date(p.createdAt).toLocaleString()}
+                    {p.kind} · {p.width} × {p.height} px · {formatBytes(p.size)} · <When at={p.createdAt} />
                   </p>
+                  <PhotoMatchLine link={p.match} />
+                  {canUpload ? <ReuseAsReference photoId={p.id} current={p.match} /> : null}
                 </div>
               </li>
             ))}

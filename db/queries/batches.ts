@@ -4,6 +4,7 @@ import { costOfBatch, defaultBase, getBase } from '../../lib/batches/batchMateri
 import { splitZoneCups } from '../../lib/recipes';
 import { sampleFigures } from './pours';
 import { batchMovements } from './stock';
+import { lightState } from './light';
 import type { DB } from '../open';
 import { batches, matches, molds, pours, samples, teams, users, zones } from '../schema';
 
@@ -81,6 +82,8 @@ function batchViews(database: DB, teamId: string, where: { batchId?: string; mat
       tolerance,
       pass: b.pass,
       zones: zs,
+      // Against the standard's photo: was each corrected from a grey card?
+      light: lightState(batchSamples.filter((s) => s.batchId === b.id), stdSamples.some((s) => s.pourId === b.standardPourId && (s.whiteBalance as { applied?: boolean } | null)?.applied)),
       cups: b.cups,
       moldId: b.moldId,
       mold,

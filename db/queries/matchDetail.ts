@@ -1,7 +1,8 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { Shape } from '../../lib/color/types';
 import type { DB } from '../open';
-import { photos, samples } from '../schema';
+import { matches, photos, samples } from '../schema';
+import { type NeutralMark, lastNeutral, targetHasCard } from './light';
 import { getMatch, type MatchView } from './matches';
 
 export type TargetPhoto = { photoId: string; width: number; height: number; zones: { name: string; shape: Shape; lab: { l: number; a: number; b: number }; hex: string }[] };
@@ -9,7 +10,8 @@ export type TargetDetail = {
   zones: { name: string; lab: { l: number; a: number; b: number }; hex: string; spread: number | null; flakeCoverage: number | null }[];
   photos: TargetPhoto[];
 };
-export type MatchDetail = Omit<MatchView, 'target'> & { target: TargetDetail | null; targetPhotos: TargetPhoto[] };
+export type DraftPhoto = { photoId: string; width: number; height: number };
+export type MatchDetail = Omit<MatchView, 'target'> & { target: TargetDetail | null; targetPhotos: TargetPhoto[]; draft: DraftPhoto | null; lastNeutral: NeutralMark | null; targetHasCard: boolean };
 
 // A match with the reference photos its target was sampled on and each
 // zone's region, for the bench. `target` keeps the API's shape, with extras.
@@ -37,5 +39,13 @@ export function getMatchDetail(database: DB, teamId: string, matchId: string): M
   const target = match.target
     ? { zones: match.target.zones.map((z) => ({ ...z, flakeCoverage: flakeOf(z.name) })), photos: targetPhotos }
     : null;
-  return { ...match, target, targetPhotos };
+  // A reference photo uploaded but not yet measured (kept across reloads).
+  const draft =
+    database
+      .select({ photoId: photos.id, width: photos.width, height: photos.height })
+      .from(matches)
+      .innerJoin(photos, and(eq(photos.id, matches.draftPhotoId), eq(photos.teamId, teamId)))
+      .where(and(eq(matches.id, matchId), eq(matches.teamId, teamId)))
+      .get() ?? null;
+  return { ...match, target, targetPhotos, draft, lastNeutral: lastNeutral(database, teamId, matchId), targetHasCard: targetHasCard(database, teamId, matchId) };
 }

@@ -1,6 +1,6 @@
-import { and, desc, eq } from 'drizzle-orm';
+import { and, desc, eq, inArray } from 'drizzle-orm';
 import type { DB } from '../open';
-import { type NewPhoto, type PhotoKind, photos } from '../schema';
+import { type NewPhoto, type PhotoKind, matches, photos, samples } from '../schema';
 
 // What the API shows of a photo: never its storage key.
 const publicColumns = {
@@ -35,6 +35,28 @@ export function getPhotoFile(database: DB, teamId: string, photoId: string) {
   );
 }
 
-export function listPhotos(database: DB, teamId: string, limit = 48): PhotoView[] {
-  return database.select(publicColumns).from(photos).where(eq(photos.teamId, teamId)).orderBy(desc(photos.createdAt)).limit(limit).all();
+export type PhotoMatchLink = { id: string; name: string; status: string; use: 'draft' | 'target' | 'pour' | 'batch' | 'swatch' };
+export type PhotoListItem = PhotoView & { match: PhotoMatchLink | null };
+
+// The team's recent photos, each with the match it belongs to: the one it was
+// measured for (target, pour or batch), or the one holding it as a draft reference.
+export function listPhotos(database: DB, teamId: string, limit = 48): PhotoListItem[] {
+  const rows = database.select(publicColumns).from(photos).where(eq(photos.teamId, teamId)).orderBy(desc(photos.createdAt)).limit(limit).all();
+  if (rows.length === 0) return [];
+  const ids = rows.map((r) => r.id);
+  const links = new Map<string, PhotoMatchLink>();
+  const measured = database
+    .selectDistinct({ photoId: samples.photoId, id: matches.id, name: matches.name, status: matches.status, use: samples.purpose })
+    .from(samples)
+    .innerJoin(matches, and(eq(matches.id, samples.matchId), eq(matches.teamId, teamId)))
+    .where(and(eq(samples.teamId, teamId), inArray(samples.photoId, ids)))
+    .all();
+  for (const m of measured) if (!links.has(m.photoId)) links.set(m.photoId, { id: m.id, name: m.name, status: m.status, use: m.use });
+  const drafts = database
+    .select({ photoId: matches.draftPhotoId, id: matches.id, name: matches.name, status: matches.status })
+    .from(matches)
+    .where(and(eq(matches.teamId, teamId), inArray(matches.draftPhotoId, ids)))
+    .all();
+  for (const d of drafts) if (d.photoId && !links.has(d.photoId)) links.set(d.photoId, { id: d.id, name: d.name, status: d.status, use: 'draft' });
+  return rows.map((r) => ({ ...r, match: links.get(r.id) ?? null }));
 }

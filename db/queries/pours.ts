@@ -2,6 +2,7 @@ import { and, asc, eq } from 'drizzle-orm';
 import { bandFor, describeDifference, labToHex } from '../../lib/color';
 import type { DB } from '../open';
 import { type Sample, colorants, molds, pours, recipeLines, samples, users, zones } from '../schema';
+import { lightState, targetHasCard } from './light';
 
 // A pour in the API's Pour shape: measured colour and ΔE00 per zone against
 // the target, with the direction in words, and its recipe per cup.
@@ -49,6 +50,8 @@ export function getPour(database: DB, teamId: string, pourId: string) {
         };
       })
       .filter((z) => z !== null),
+    // Whether this photo and the reference were both corrected from a grey card.
+    light: lightState(zoneSamples, targetHasCard(database, teamId, p.matchId)),
     recipe,
   };
 }

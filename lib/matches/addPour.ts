@@ -11,6 +11,7 @@ import type { PourInput } from '@/lib/validations/match';
 import { defaultBase } from '@/lib/batches/batchMaterials';
 import { batchDraws, splitZoneCups } from '@/lib/recipes';
 import { moveStock } from '@/lib/stock/moveStock';
+import { toLibraryUnits } from './libraryUnits';
 import { assertZonesOfMatch, loadMatch } from './loadMatch';
 import { comparedExtras, measureZones } from './measureZones';
 
@@ -30,14 +31,17 @@ export async function addPour(database: DB, member: Member, matchId: string, inp
     if (!zoneNames.has(l.zone)) throw new ApiError(400, 'invalid_body', `recipe[${i}].zone: "${l.zone}" is not a zone of this match`);
   });
   const colorantIds = [...new Set(input.recipe.map((l) => l.colorantId))];
-  const known = new Set(
-    colorantIds.length
-      ? database.select({ id: colorants.id }).from(colorants).where(and(eq(colorants.teamId, teamId), inArray(colorants.id, colorantIds), isNull(colorants.archivedAt))).all().map((c) => c.id)
-      : [],
+  const known = new Map(
+    (colorantIds.length
+      ? database.select({ id: colorants.id, name: colorants.name, unit: colorants.unit }).from(colorants).where(and(eq(colorants.teamId, teamId), inArray(colorants.id, colorantIds), isNull(colorants.archivedAt))).all()
+      : []
+    ).map((c) => [c.id, c]),
   );
   input.recipe.forEach((l, i) => {
     if (!known.has(l.colorantId)) throw new ApiError(400, 'invalid_body', `recipe[${i}].colorantId: no such colorant in your library (or it was archived)`);
   });
+  const team = database.select({ dropsPerMl: teams.dropsPerMl }).from(teams).where(eq(teams.id, teamId)).get()!;
+  const recipe = toLibraryUnits(input.recipe, known, team.dropsPerMl);
   if (input.moldId && !database.select({ id: molds.id }).from(molds).where(and(eq(molds.id, input.moldId), eq(molds.teamId, teamId), isNull(molds.archivedAt))).get()) {
     throw new ApiError(400, 'invalid_body', 'moldId: no such mold in your library (or it was archived)');
   }
@@ -57,7 +61,7 @@ export async function addPour(database: DB, member: Member, matchId: string, inp
         tempF: input.tempF ?? null, notes: input.notes ?? null, correctsPourId: input.correctsPourId ?? null, createdBy: member.user.id,
       })
       .run();
-    input.recipe.forEach((l, position) => tx.insert(recipeLines).values({ id: newId(), pourId: id, position, ...l }).run());
+    recipe.forEach((l, position) => tx.insert(recipeLines).values({ id: newId(), pourId: id, position, ...l }).run());
     measured.regions.forEach((r, i) => {
       const z = zoneRows.find((zr) => zr.name === r.name)!;
       const cmp = compareLab({ l: z.targetL!, a: z.targetA!, b: z.targetB! }, r.lab, match.tolerance);

@@ -37,6 +37,8 @@ export async function setTarget(database: DB, member: Member, matchId: string, i
         })
         .run();
     });
+    // The draft reference photo is now a measured one.
+    if (match.draftPhotoId === input.photoId) tx.update(matches).set({ draftPhotoId: null }).where(eq(matches.id, matchId)).run();
     for (const name of names) {
       const rows = tx.select({ l: samples.l, a: samples.a, b: samples.b }).from(samples)
         .where(and(eq(samples.matchId, matchId), eq(samples.purpose, 'target'), eq(samples.zone, name))).all();

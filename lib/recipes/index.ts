@@ -7,3 +7,4 @@ export { planRun, type RunPlan, type RunPlanInput, type PlanMoldInput, type Plan
 export { batchDraws, type Draw, type DrawColorant, type DrawLine, type Undrawn } from './batchDraws';
 export { batchCost, type BatchCost, type CostMold } from './batchCost';
 export { encodeBatchPrefill, decodeBatchPrefill, type BatchPrefill } from './batchPrefill';
+export { parseAmount, type ParsedAmount } from './parseAmount';

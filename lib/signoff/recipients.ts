@@ -1,6 +1,6 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import type { DB } from '@/db/open';
-import { memberships, pours, users } from '@/db/schema';
+import { memberships, pours, recipeLines, users } from '@/db/schema';
 import { ApiError } from '@/lib/http/api';
 
 // Everyone in the team who may sign off: its leads and owners.
@@ -23,4 +23,16 @@ export function loadPour(database: Pick<DB, 'select'>, teamId: string, pourId: s
   const pour = database.select().from(pours).where(and(eq(pours.id, pourId), eq(pours.teamId, teamId))).get();
   if (!pour) throw new ApiError(404, 'not_found', 'No such pour in your team');
   return pour;
+}
+
+// A pour without recipe lines cannot become a standard: production would have
+// nothing to mix. Submitting and approving both refuse it (409).
+export function assertHasRecipe(database: Pick<DB, 'select'>, pour: { id: string; number: number }, action: 'submitted' | 'approved') {
+  const line = database.select({ id: recipeLines.id }).from(recipeLines).where(eq(recipeLines.pourId, pour.id)).limit(1).get();
+  if (line) return;
+  throw new ApiError(
+    409,
+    'no_recipe',
+    `Pour #${pour.number} has no recipe lines, so it cannot be ${action}: log a new pour with the doses you mixed`,
+  );
 }

@@ -10,7 +10,7 @@ import { queueMail } from '@/lib/mail/queue';
 import { decisionMail } from '@/lib/mail/templates-production';
 import { loadMatch } from '@/lib/matches/loadMatch';
 import type { SignOffInput } from '@/lib/validations/production';
-import { loadPour, userById } from './recipients';
+import { assertHasRecipe, loadPour, userById } from './recipients';
 import { pourLink } from './submitPour';
 
 // A lead's (or owner's) decision on a submitted pour, in one transaction.
@@ -30,6 +30,7 @@ export function signOffPour(database: DB, member: Member, pourId: string, input:
     if (pour.status !== 'submitted') {
       throw new ApiError(409, 'not_submitted', `Pour #${pour.number} is ${pour.status}; only a pour submitted for sign-off can be decided`);
     }
+    if (input.decision === 'approved') assertHasRecipe(tx, pour, 'approved');
     const now = Date.now();
     tx.insert(signOffs)
       .values({ id: newId(), teamId, matchId: match.id, pourId: pour.id, decision: input.decision, comment: input.comment, decidedBy: actorId, createdAt: now })

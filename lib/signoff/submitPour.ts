@@ -9,7 +9,7 @@ import { queueMail } from '@/lib/mail/queue';
 import { signOffRequestedMail } from '@/lib/mail/templates-production';
 import { loadMatch } from '@/lib/matches/loadMatch';
 import type { SubmitInput } from '@/lib/validations/production';
-import { leadsAndOwners, loadPour } from './recipients';
+import { assertHasRecipe, leadsAndOwners, loadPour } from './recipients';
 
 const SUBMITTABLE = new Set(['measured', 'rework']);
 
@@ -35,6 +35,7 @@ export function submitPour(database: DB, member: Member, pourId: string, input: 
       .where(and(eq(pours.matchId, match.id), eq(pours.status, 'submitted'), ne(pours.id, pour.id)))
       .get();
     if (other) throw new ApiError(409, 'in_review', `Pour #${other.number} of this match is already waiting for sign-off`);
+    assertHasRecipe(tx, pour, 'submitted');
     const now = Date.now();
     tx.update(pours).set({ status: 'submitted', submittedAt: now, submittedBy: member.user.id }).where(eq(pours.id, pour.id)).run();
     tx.update(matches).set({ status: 'in_review', updatedAt: now }).where(eq(matches.id, match.id)).run();

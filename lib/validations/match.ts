@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { DOSE_UNITS } from '@/db/schema';
 import { shapeSchema } from '@/lib/color/shapeSchema';
+import { parseAmount } from '@/lib/recipes/parseAmount';
 
 export const zoneName = z
   .string({ error: 'a zone name must be text' })
@@ -51,11 +52,23 @@ export const targetSchema = z.object({ photoId: idField, zones: zoneRegions, neu
 // typing slips (a dose of 5000 drops per cup is not a recipe).
 const MAX_PER_CUP: Record<(typeof DOSE_UNITS)[number], number> = { drops: 500, tsp: 48, g: 500, ml: 236.6 };
 
+// An amount is a number, or text as a maker types it ("1/2", "1 1/4", "¼",
+// "0,5"), read by the one dose parser; anything else is refused with its reason.
+export const amountField = z
+  .union([z.number(), z.string()], { error: 'amount must be a number' })
+  .transform((v, ctx) => {
+    const r = parseAmount(v);
+    if (r.ok) return r.value;
+    ctx.addIssue({ code: 'custom', message: typeof v === 'number' ? 'amount must be a number' : r.message });
+    return z.NEVER;
+  })
+  .pipe(z.number().gt(0, 'amount must be more than 0'));
+
 export const recipeLineSchema = z
   .object({
     zone: zoneName,
     colorantId: idField,
-    amount: z.number({ error: 'amount must be a number' }).gt(0, 'amount must be more than 0'),
+    amount: amountField,
     unit: z.enum(DOSE_UNITS, { error: `unit must be one of ${DOSE_UNITS.join(', ')}` }),
   })
   .refine((l) => l.amount <= MAX_PER_CUP[l.unit], { message: 'amount is more than a cup of plastisol could take', path: ['amount'] });
@@ -78,3 +91,15 @@ export const pourSchema = z.object({
 
 export type TargetInput = z.infer<typeof targetSchema>;
 export type PourInput = z.infer<typeof pourSchema>;
+
+export const draftPhotoSchema = z.object({ photoId: idField });
+
+// What may change on a match after it is created (pours never change).
+export const editMatchSchema = z
+  .object({
+    name: createMatchSchema.shape.name.optional(),
+    notes: z.string().max(4000, 'notes must be at most 4000 characters').nullable().optional(),
+    tolerance: toleranceField.optional(),
+  })
+  .refine((v) => v.name !== undefined || v.notes !== undefined || v.tolerance !== undefined, 'give a name, notes or tolerance to change');
+export type EditMatchInput = z.infer<typeof editMatchSchema>;

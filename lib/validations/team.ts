@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isTimeZone } from '@/lib/format/dates';
 import { VOLUME_UNITS } from '@/lib/recipes/units';
 
 export const teamSettingsSchema = z.object({
@@ -11,4 +12,6 @@ export const teamSettingsSchema = z.object({
   // A checkbox: present ("on") when ticked, absent otherwise.
   stockDrawsPours: z.preprocess((v) => v === 'on' || v === 'true' || v === true, z.boolean()),
   sprueAllowanceMl: z.coerce.number({ error: 'sprue allowance must be a number' }).min(0, 'sprue allowance cannot be negative').max(500, 'sprue allowance must be at most 500 mL'),
+  // The shop's time zone (IANA name): dates on pages and printed sheets read in it.
+  timeZone: z.string().trim().max(64).refine(isTimeZone, 'choose a time zone from the list').optional(),
 });

@@ -9,7 +9,7 @@
 // 404); for routes without an id it may also be invalid (answered 400, after the gate).
 
 export type Role = 'viewer' | 'maker' | 'lead' | 'owner';
-export type IdKind = 'match' | 'pour' | 'batch' | 'photo' | 'colorant' | 'mold';
+export type IdKind = 'match' | 'pour' | 'batch' | 'photo' | 'colorant' | 'mold' | 'invitation';
 
 export type RouteEntry = {
   method: 'GET' | 'POST' | 'PATCH' | 'DELETE';
@@ -30,6 +30,8 @@ export const ROUTES: RouteEntry[] = [
   { method: 'POST', path: '/api/auth/sign-out', role: 'public' },
   { method: 'GET', path: '/api/me', role: 'viewer' },
   { method: 'POST', path: '/api/team/invitations', role: 'owner', body: {} },
+  { method: 'DELETE', path: '/api/team/invitations/:id', role: 'owner', id: 'invitation' },
+  { method: 'POST', path: '/api/team/invitations/:id/resend', role: 'owner', id: 'invitation' },
   { method: 'GET', path: '/api/team/export', role: 'owner' },
   { method: 'GET', path: '/api/dev/mailbox', role: 'owner' },
   { method: 'POST', path: '/api/delta-e', role: 'viewer', body: {} },
@@ -59,7 +61,11 @@ export const ROUTES: RouteEntry[] = [
   { method: 'GET', path: '/api/matches', role: 'viewer' },
   { method: 'POST', path: '/api/matches', role: 'maker', body: {} },
   { method: 'GET', path: '/api/matches/:id', role: 'viewer', id: 'match' },
+  { method: 'PATCH', path: '/api/matches/:id', role: 'maker', id: 'match', body: { notes: 'matrix' } },
   { method: 'GET', path: '/api/matches/:id/history', role: 'viewer', id: 'match' },
+  { method: 'GET', path: '/api/matches/:id/edits', role: 'viewer', id: 'match' },
+  { method: 'POST', path: '/api/matches/:id/draft-photo', role: 'maker', id: 'match', body: { photoId: 'matrix-photo' } },
+  { method: 'DELETE', path: '/api/matches/:id/draft-photo', role: 'maker', id: 'match' },
   { method: 'POST', path: '/api/matches/:id/target', role: 'maker', id: 'match', body: { photoId: 'matrix-photo', zones } },
   { method: 'POST', path: '/api/matches/:id/pours', role: 'maker', id: 'match', body: { photoId: 'matrix-photo', recipe: [], zones } },
   { method: 'GET', path: '/api/matches/:id/batches', role: 'viewer', id: 'match' },
@@ -73,6 +79,7 @@ export const ROUTES: RouteEntry[] = [
   { method: 'POST', path: '/api/pours/:id/submit', role: 'maker', id: 'pour', body: {} },
   { method: 'POST', path: '/api/pours/:id/sign-off', role: 'lead', id: 'pour', body: { decision: 'rework', comment: 'matrix check' } },
   { method: 'GET', path: '/api/standards', role: 'viewer' },
+  { method: 'GET', path: '/api/sign-off-queue', role: 'viewer' },
   { method: 'GET', path: '/api/batches', role: 'viewer' },
   { method: 'GET', path: '/api/batches/:id', role: 'viewer', id: 'batch' },
   { method: 'GET', path: '/api/batches/:id/sheet', role: 'viewer', id: 'batch' },

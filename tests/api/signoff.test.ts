@@ -20,9 +20,10 @@ async function matchWithTarget(cookie: string, name: string) {
   return created.body.id as string;
 }
 
-async function pour(cookie: string, matchId: string) {
+let pigmentId = '';
+async function pour(cookie: string, matchId: string, recipe = [{ zone: 'back', colorantId: pigmentId, amount: 4, unit: 'drops' }]) {
   const photo = await uploadPhoto(cookie, await twoTonePng(NEAR.back, NEAR.belly), 'pour');
-  const res = await api(`/api/matches/${matchId}/pours`, { cookie, body: { photoId: photo.id, recipe: [], tempF: 340, zones: ZONES } });
+  const res = await api(`/api/matches/${matchId}/pours`, { cookie, body: { photoId: photo.id, recipe, tempF: 340, zones: ZONES } });
   expect(res.status).toBe(201);
   return res.body as { id: string; number: number };
 }
@@ -37,6 +38,35 @@ describe('sign-off: submit, approve, rework, standards', () => {
     lead = await signInAs('lead@demo.test', 'pourproof-demo', '10.70.0.2');
     owner = await signInAs('owner@demo.test', 'pourproof-demo', '10.70.0.3');
     viewer = await signInAs('viewer@demo.test', 'pourproof-demo', '10.70.0.4');
+    const colorants = (await api('/api/colorants', { cookie: maker })).body as any[];
+    pigmentId = colorants.find((c) => c.kind === 'pigment' && c.unit === 'drops').id;
+  });
+
+  it('refuses to submit or approve a pour without recipe lines (409), and changes nothing', async () => {
+    const matchId = await matchWithTarget(maker, `No recipe ${uniq()}`);
+    const empty = await pour(maker, matchId, []);
+    const sub = await api(`/api/pours/${empty.id}/submit`, { cookie: maker, body: {} });
+    expect(sub.status).toBe(409);
+    expectErrorShape(sub.body);
+    expect(sub.body.error.code).toBe('no_recipe');
+    expect(sub.body.error.message).toMatch(/^Pour #1 has no recipe lines, so it cannot be submitted/);
+    expect((await api(`/api/pours/${empty.id}`, { cookie: maker })).body.status).toBe('measured');
+    expect((await api(`/api/matches/${matchId}`, { cookie: maker })).body.status).toBe('open');
+
+    // A recipe-less pour already waiting (from before this check) cannot be approved; rework still can.
+    const database = openDatabase(inject('dbFile'));
+    try {
+      database.update(pours).set({ status: 'submitted' }).where(eq(pours.id, empty.id)).run();
+    } finally {
+      database.$client.close();
+    }
+    const approve = await api(`/api/pours/${empty.id}/sign-off`, { cookie: lead, body: { decision: 'approved' } });
+    expect(approve.status).toBe(409);
+    expect(approve.body.error.code).toBe('no_recipe');
+    expect(approve.body.error.message).toMatch(/cannot be approved/);
+    expect((await api(`/api/matches/${matchId}`, { cookie: maker })).body.standardPourId).toBeNull();
+    const back = await api(`/api/pours/${empty.id}/sign-off`, { cookie: lead, body: { decision: 'rework', comment: 'log the doses' } });
+    expect(back.status).toBe(200);
   });
 
   it('submits, e-mails the leads, lets only leads decide, and retires a replaced standard', async () => {

@@ -22,6 +22,8 @@ describe.runIf(browserAvailable())('browser: sign in as the demo maker', () => {
     await table.waitFor();
     expect(await table.textContent()).toContain('Dusk crawdad');
     await page.screenshot({ path: artifactPath('matches-390.png'), fullPage: true });
+    // At phone width the sections, the member's name and Sign out sit in the menu.
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('button', { name: 'Menu' }).click();
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.waitForURL(/\/sign-in$/);
     await page.goto(`${baseUrl()}/matches`);

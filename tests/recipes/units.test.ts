@@ -53,11 +53,11 @@ describe('recipe arithmetic against the exact US customary definitions', () => {
 describe('batch volumes in the shop’s batch size unit (team setting)', () => {
   // NIST Handbook 44 (2024), Appendix C: 1 cup = 8 fl oz; 16 cups = 1 gal; 1 cup = 236.5882365 mL.
   it('shows cups as fluid ounces, gallons or millilitres', async () => {
-    const { volume } = await import('../../components/production/dose');
-    expect(volume(2, 'cups')).toBe('2 cups');
-    expect(volume(1, 'cups')).toBe('1 cup');
-    expect(volume(2, 'floz')).toBe('16 fl oz');
-    expect(volume(8, 'gal')).toBe('0.5 gal');
-    expect(volume(2, 'ml')).toBe('473 mL');
+    const { formatVolume } = await import('../../lib/format');
+    expect(formatVolume(2, 'cups')).toBe('2 cups');
+    expect(formatVolume(1, 'cups')).toBe('1 cup');
+    expect(formatVolume(2, 'floz')).toBe('16 fl oz');
+    expect(formatVolume(8, 'gal')).toBe('0.5 gal');
+    expect(formatVolume(2, 'ml')).toBe('473.2 mL');
   });
 });

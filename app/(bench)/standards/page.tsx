@@ -6,6 +6,7 @@ import { standardCost } from '@/lib/batches/batchMaterials';
 import { StandardsList } from '@/components/production/standards-list';
 import { requirePageMember } from '@/lib/auth/current';
 import { CsvDownload } from '@/components/library/csv-tools';
+import { roleAtLeast } from '@/lib/auth/roles';
 
 export const metadata = { title: 'Standards' };
 
@@ -34,7 +35,7 @@ export default async function StandardsPage() {
         </p>
         <div className="mt-2"><CsvDownload what="standards" label="Download standards and recipes (CSV)" /></div>
       </div>
-      <StandardsList standards={standards} />
+      <StandardsList standards={standards} canLog={roleAtLeast(member.role, 'maker')} />
     </section>
   );
 }

@@ -3,6 +3,9 @@ import { listTeamMembers } from '@/db/queries/members';
 import { getTeamSettings } from '@/db/queries/teams';
 import { InviteForm } from '@/components/team/invite-form';
 import { SettingsForm } from '@/components/team/settings-form';
+import { InvitationActions } from '@/components/team/invitation-actions';
+import { When } from '@/components/ui/when';
+import { timeZoneList } from '@/lib/format/dates';
 import { MemberRowActions } from '@/components/team/member-row-actions';
 import { requirePageMember } from '@/lib/auth/current';
 import { listOpenInvitations } from '@/lib/team/invitations';
@@ -54,8 +57,13 @@ export default async function TeamPage() {
           {invites.length ? (
             <div className="mt-4">
               <h3 className="text-sm font-semibold">Waiting for an answer</h3>
-              <ul className="mt-1 text-sm text-ink-soft">
-                {invites.map((i) => <li key={i.id}>{i.email} as {i.role}, until {new Date(i.expiresAt).toISOString().slice(0, 10)}</li>)}
+              <ul className="mt-1 space-y-2 text-sm" aria-label="Pending invitations">
+                {invites.map((i) => (
+                  <li key={i.id} className="flex flex-wrap items-center justify-between gap-2">
+                    <span className="text-ink-soft">{i.email} as {i.role}, until <When at={i.expiresAt} dayOnly /></span>
+                    <InvitationActions id={i.id} email={i.email} />
+                  </li>
+                ))}
               </ul>
             </div>
           ) : null}
@@ -64,7 +72,7 @@ export default async function TeamPage() {
       {isOwner ? (
         <div className="rounded-lg border border-panel-line bg-white p-4">
           <h2 className="mb-3 text-lg font-semibold">Shop settings</h2>
-          <SettingsForm settings={getTeamSettings(db(), member.team.id)!} action={saveTeamSettings} />
+          <SettingsForm settings={getTeamSettings(db(), member.team.id)!} timeZones={timeZoneList()} action={saveTeamSettings} />
         </div>
       ) : null}
       {isOwner ? (

@@ -2,8 +2,11 @@ import Link from 'next/link';
 import { db } from '@/db';
 import { listRecentBatches } from '@/db/queries/batches';
 import { RecentBatches } from '@/components/production/recent-batches';
+import { LogBatchPicker } from '@/components/production/log-batch-picker';
+import { listStandards } from '@/db/queries/standards';
 import { requirePageMember } from '@/lib/auth/current';
 import { CsvDownload } from '@/components/library/csv-tools';
+import { roleAtLeast } from '@/lib/auth/roles';
 
 export const metadata = { title: 'Batches' };
 
@@ -20,6 +23,7 @@ export default async function BatchesPage() {
         </p>
         <div className="mt-2"><CsvDownload what="batches" label="Download batches with ΔE00 (CSV)" /></div>
       </div>
+      {roleAtLeast(member.role, 'maker') ? <LogBatchPicker standards={listStandards(db(), member.team.id).map((s) => ({ matchId: s.matchId, name: s.name }))} /> : null}
       <RecentBatches batches={batches} />
     </section>
   );

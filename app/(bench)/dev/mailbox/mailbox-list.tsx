@@ -1,5 +1,6 @@
 'use client';
 
+import { When } from '@/components/ui/when';
 import useSWR from 'swr';
 import { swrFetcher } from '@/lib/http/client';
 
@@ -36,7 +37,7 @@ export function MailboxList() {
           <div className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1">
             <h2 className="font-semibold">{m.subject || '(no subject)'}</h2>
             <time dateTime={new Date(m.at).toISOString()} className="num text-sm text-ink-soft">
-              {new Date(m.at).toLocaleString()}
+              <When at={new Date(m.at).getTime()} />
             </time>
           </div>
           <p className="mt-0.5 break-all text-sm text-ink-soft">To: {m.to}</p>

@@ -41,6 +41,7 @@ ALTER TABLE `batches` ADD `zone_cups` text;--> statement-breakpoint
 ALTER TABLE `batches` ADD `plan` text;--> statement-breakpoint
 ALTER TABLE `batches` ADD `base_colorant_id` text REFERENCES colorants(id);--> statement-breakpoint
 ALTER TABLE `colorants` ADD `low_stock_at` real;--> statement-breakpoint
+ALTER TABLE `matches` ADD `draft_photo_id` text REFERENCES photos(id);--> statement-breakpoint
 ALTER TABLE `samples` ADD `uncertainty` real;--> statement-breakpoint
 ALTER TABLE `samples` ADD `de00_uncertainty` real;--> statement-breakpoint
 ALTER TABLE `samples` ADD `shading` real;--> statement-breakpoint
@@ -48,4 +49,5 @@ ALTER TABLE `samples` ADD `other` text;--> statement-breakpoint
 ALTER TABLE `samples` ADD `reference_shape` text;--> statement-breakpoint
 ALTER TABLE `samples` ADD `in_frame` text;--> statement-breakpoint
 ALTER TABLE `teams` ADD `currency` text DEFAULT 'USD' NOT NULL;--> statement-breakpoint
-ALTER TABLE `teams` ADD `stock_draws_pours` integer DEFAULT false NOT NULL;
+ALTER TABLE `teams` ADD `stock_draws_pours` integer DEFAULT false NOT NULL;--> statement-breakpoint
+ALTER TABLE `teams` ADD `time_zone` text DEFAULT 'UTC' NOT NULL;
