@@ -285,6 +285,14 @@ export const samples = sqliteTable(
     dL: real('dl'),
     dC: real('dc'),
     dH: real('dh'),
+    // ΔE00 radius (about 95 %, k = 2) of the region's colour, and of dE00 from both measurements.
+    uncertainty: real('uncertainty'),
+    dE00Uncertainty: real('de00_uncertainty'),
+    shading: real('shading'),
+    other: text('other', { mode: 'json' }),
+    // The physical reference in the same photo: its shape and the comparison with it.
+    referenceShape: text('reference_shape', { mode: 'json' }),
+    inFrame: text('in_frame', { mode: 'json' }),
     createdAt: integer('created_at').notNull().default(now),
   },
   (t) => [

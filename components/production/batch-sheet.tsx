@@ -2,6 +2,7 @@ import Link from 'next/link';
 import { SAFETY_CAUTIONS, TEMPERATURE_CAUTION } from '@/lib/batches/safetyCautions';
 import { amount } from './dose';
 import { PassBadge } from './pass-badge';
+import { SheetQc } from './sheet-qc';
 import { PrintButton } from './print-button';
 import { type Sheet, SheetMolds, SheetRecipe } from './sheet-tables';
 import { ThicknessRedose } from './thickness-redose';
@@ -47,6 +48,7 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
           <Item label="Tolerance"><span className="num">{sheet.match.tolerance.toFixed(1)} ΔE00</span></Item>
           <Item label="Baits counted"><span className="num">{sheet.batch.baits ?? '____'}</span></Item>
         </dl>
+        <SheetQc sheet={sheet} />
       </header>
 
       <section aria-labelledby="sheet-safety" className={`${box} sheet-keep border-2 border-ink`}>

@@ -53,6 +53,8 @@ export function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
     thicknessRedose: redose,
     batch: { id: batch.id, createdAt: batch.createdAt, createdBy: batch.createdBy, pass: batch.pass, baits: batch.baits, baitsExpected: batch.baitsExpected, notes: batch.notes },
     match: { id: batch.matchId, name: batch.matchName, tolerance: batch.tolerance },
+    // Per zone: ΔE00 (with its ±) against the standard and, when marked, against the reference in frame.
+    qc: batch.zones.map((z) => ({ name: z.name, dE00: z.dE00, uncertainty: z.uncertainty, band: z.band, inFrame: z.inFrame as { dE00: number; band: string; uncertainty?: number } | null })),
     standard: { pourId: std.id, number: std.number, moldId: std.moldId, batchCups: std.batchCups },
     ...sheet,
   };

@@ -65,6 +65,12 @@ export interface RegionMeasure {
   /** Fraction (0..1) of the region's pixels taken as glare. */
   glare: number;
   flake: { coverage: number; groups: FlakeGroup[] };
+  /** ΔE00 radius around `lab` holding the true base colour with about 95 % confidence (k = 2, JCGM 100:2008). */
+  uncertainty: number;
+  /** Range of L* that a smooth light fall-off across the region accounts for (0 when evenly lit). */
+  shading: number;
+  /** A second colour filling a connected part of the region, kept out of base and flake. */
+  other: { share: number; lab: Lab } | null;
 }
 
 export interface LabComparison {

@@ -15,4 +15,10 @@ CREATE TABLE `swatches` (
 );
 --> statement-breakpoint
 CREATE INDEX `swatches_team_idx` ON `swatches` (`team_id`);--> statement-breakpoint
-CREATE INDEX `swatches_colorant_idx` ON `swatches` (`colorant_id`);
+CREATE INDEX `swatches_colorant_idx` ON `swatches` (`colorant_id`);--> statement-breakpoint
+ALTER TABLE `samples` ADD `uncertainty` real;--> statement-breakpoint
+ALTER TABLE `samples` ADD `de00_uncertainty` real;--> statement-breakpoint
+ALTER TABLE `samples` ADD `shading` real;--> statement-breakpoint
+ALTER TABLE `samples` ADD `other` text;--> statement-breakpoint
+ALTER TABLE `samples` ADD `reference_shape` text;--> statement-breakpoint
+ALTER TABLE `samples` ADD `in_frame` text;
