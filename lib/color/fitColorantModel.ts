@@ -16,7 +16,12 @@ import type { ColorantModel, DoseObservation, Vec3 } from './types';
 // The residual is in L*-like units, 116·(∛R_model − ∛R_logged), the CIE 1976 cube-root
 // compression (CIE 15:2004 §8.2.1) applied per channel, so dark and light colours weigh alike.
 const L_SCALE = 116;
-/** Prior on scattering: s_i = 0.1 per unit dose costs as much as a 1-unit misfit of one colour. */
+/**
+ * Prior on scattering, divided by √(colours the colorant was dosed in): with one swatch, s_i = 0.01
+ * per unit dose costs as much as a 1-unit misfit, so a colorant seen alone stays single-constant;
+ * with many mixtures the data decide. On the simulated colorant system a fixed, weaker prior let
+ * one-swatch colorants bend the fit and mispredict mixtures (starting recipes 4–5 ΔE00 off).
+ */
 const S_PRIOR = 100;
 /** Weak pull of k_i toward its first estimate, so a colorant seen only in mixtures stays finite. */
 const K_PRIOR = 0.05;
