@@ -46,12 +46,16 @@ export type PourFormValues = z.input<typeof formSchema>;
 
 type Props = { match: MatchDetail; initialShapes: Record<string, Shape>; previous?: PourView; onSaved: (pourId: string) => void };
 
+const refName = (zone: string) => `${zone} (reference)`;
+
 export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
   const { data: colorants } = useSWR<ColorantOption[]>('/api/colorants', swrFetcher);
   const { data: molds } = useSWR<{ id: string; name: string }[]>('/api/molds', swrFetcher);
   const [photo, setPhoto] = useState<UploadedPhoto | null>(null);
   const [shapes, setShapes] = useState<Record<string, Shape>>(initialShapes);
   const [error, setError] = useState<string | null>(null);
+  // The reference in frame: a reference bait lying beside the pour, its zones marked too.
+  const [withRef, setWithRef] = useState(false);
   const onShapes = useCallback((s: Record<string, Shape>) => setShapes(s), []);
   const { register, control, handleSubmit, setValue, getValues, formState } = useForm<PourFormValues>({
     resolver: zodResolver(formSchema),
@@ -95,7 +99,7 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
           tempF: parsed.tempF,
           notes: parsed.notes || undefined,
           correctsPourId: parsed.correctsPourId || undefined,
-          zones: match.zones.map((name) => ({ name, shape: shapes[name] })),
+          zones: match.zones.map((name) => ({ name, shape: shapes[name], ...(withRef && shapes[refName(name)] ? { reference: shapes[refName(name)] } : {}) })),
           neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL], ...(match.lastNeutral?.L ? { L: match.lastNeutral.L } : {}) } : undefined,
         }),
       });
@@ -139,7 +143,11 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
       ) : null}
       {photo ? (
         <>
-          <PhotoSampler src={`/api/photos/${photo.photoId}/image`} width={photo.width} height={photo.height} zones={match.zones} initialShapes={initialShapes} withNeutral onChange={onShapes} />
+          <label className="flex items-center gap-2 text-sm">
+            <input type="checkbox" checked={withRef} onChange={(e) => setWithRef(e.target.checked)} />
+            The reference bait lies in this photo too: mark its zones (compared under the same light, no card needed)
+          </label>
+          <PhotoSampler key={withRef ? 'with-reference' : 'pour-only'} src={`/api/photos/${photo.photoId}/image`} width={photo.width} height={photo.height} zones={withRef ? [...match.zones, ...match.zones.map(refName)] : match.zones} initialShapes={{ ...initialShapes, ...shapes }} withNeutral onChange={onShapes} />
           <CardCarriedNote neutral={match.lastNeutral} marked={Boolean(shapes[NEUTRAL])} />
           {shapes[NEUTRAL] || match.lastNeutral ? null : (
             <p className="text-sm text-ink-soft">

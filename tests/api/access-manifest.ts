@@ -70,7 +70,6 @@ export const ROUTES: RouteEntry[] = [
   { method: 'POST', path: '/api/matches/:id/pours', role: 'maker', id: 'match', body: { photoId: 'matrix-photo', recipe: [], zones } },
   { method: 'GET', path: '/api/matches/:id/batches', role: 'viewer', id: 'match' },
   { method: 'POST', path: '/api/matches/:id/batches', role: 'maker', id: 'match', body: { photoId: 'matrix-photo', zones, cups: 1 } },
-  { method: 'POST', path: '/api/matches/:id/starting-recipe', role: 'viewer', id: 'match', body: {} },
   { method: 'POST', path: '/api/matches/:id/archive', role: 'lead', id: 'match' },
   { method: 'POST', path: '/api/matches/:id/reopen', role: 'lead', id: 'match' },
   { method: 'GET', path: '/api/pours/:id', role: 'viewer', id: 'pour' },
