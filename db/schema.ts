@@ -296,6 +296,14 @@ export const samples = sqliteTable(
     dL: real('dl'),
     dC: real('dc'),
     dH: real('dh'),
+    // ΔE00 radius (about 95 %, k = 2) of the region's colour, and of dE00 from both measurements.
+    uncertainty: real('uncertainty'),
+    dE00Uncertainty: real('de00_uncertainty'),
+    shading: real('shading'),
+    other: text('other', { mode: 'json' }),
+    // The physical reference in the same photo: its shape and the comparison with it.
+    referenceShape: text('reference_shape', { mode: 'json' }),
+    inFrame: text('in_frame', { mode: 'json' }),
     createdAt: integer('created_at').notNull().default(now),
   },
   (t) => [
@@ -303,6 +311,25 @@ export const samples = sqliteTable(
     index('samples_pour_idx').on(t.pourId),
     index('samples_batch_idx').on(t.batchId),
   ],
+);
+
+// A calibration swatch: a known dose of one colorant per cup of the base plastisol (none, for a
+// swatch of the base alone), poured outside any match and measured from its photo. It feeds the
+// shop's colorant model (lib/color/fitColorantModel.ts) beside the pours.
+export const swatches = sqliteTable(
+  'swatches',
+  {
+    id: text('id').primaryKey(),
+    teamId: text('team_id').notNull().references(() => teams.id, { onDelete: 'cascade' }),
+    colorantId: text('colorant_id').notNull().references(() => colorants.id, { onDelete: 'cascade' }),
+    sampleId: text('sample_id').notNull().references(() => samples.id, { onDelete: 'cascade' }),
+    amount: real('amount').notNull(),
+    unit: text('unit', { enum: DOSE_UNITS }).notNull(),
+    notes: text('notes'),
+    createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: integer('created_at').notNull().default(now),
+  },
+  (t) => [index('swatches_team_idx').on(t.teamId), index('swatches_colorant_idx').on(t.colorantId)],
 );
 
 export const signOffs = sqliteTable(

@@ -4,13 +4,14 @@ import { BandBadge } from './band-badge';
 
 const signed = (v: number) => `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(2)}`;
 
-// The readout beside the stage: ΔE00 large (two decimals) with its band, then
-// ΔL*, ΔC*, ΔH* (ASTM D2244 signs) and the direction in words.
-export function DeltaReadout({ d, direction, extra }: { d: { dE00: number; dL: number; dC: number; dH: number; band: Band }; direction?: string | null; extra?: ReactNode }) {
+// The readout beside the stage: ΔE00 large (two decimals) with its ± (about 95 %) when the
+// measurement has one, its band, then ΔL*, ΔC*, ΔH* (ASTM D2244 signs) and the direction in words.
+export function DeltaReadout({ d, direction, extra, uncertainty }: { d: { dE00: number; dL: number; dC: number; dH: number; band: Band }; direction?: string | null; extra?: ReactNode; uncertainty?: number | null }) {
   return (
     <>
       <p className="flex flex-wrap items-baseline gap-3">
         <span className="num text-4xl font-semibold" aria-label={`ΔE00 ${d.dE00.toFixed(2)}`}>{d.dE00.toFixed(2)}</span>
+        {uncertainty ? <span className="num text-xl text-ink-soft" aria-label={`plus or minus ${uncertainty.toFixed(2)}`} title="About 95 % sure the true difference lies within this">± {uncertainty.toFixed(2)}</span> : null}
         <span className="text-ink-soft">ΔE00</span>
         <BandBadge band={d.band} />
         {extra}

@@ -94,7 +94,7 @@ export function MatchBench({ matchId, canPour, production }: { matchId: string; 
               {!latestPourId || latestPour ? <PourForm match={match} initialShapes={lastShapes()} previous={latestPour} onSaved={(id) => { void mutate(); select(id); }} /> : null}
             </div>
           ) : null}
-          {mode === 'compare' && selectedId && match.target ? <PourCompare key={selectedId} pourId={selectedId} previousId={previousId} target={match.target} /> : null}
+          {mode === 'compare' && selectedId && match.target ? <PourCompare key={selectedId} pourId={selectedId} previousId={previousId} target={match.target} tolerance={match.tolerance} /> : null}
           {mode === 'compare' && selectedId ? <SignOffPanel key={`signoff-${selectedId}`} match={match} pourId={selectedId} canSubmit={canPour} canDecide={production.canDecide} /> : null}
         </section>
       ) : null}

@@ -11,7 +11,7 @@ import { NextPourHint } from './next-pour-hint';
 import { RecipeDiff } from './recipe-diff';
 import { ZoneReadout } from './zone-readout';
 
-export function PourCompare({ pourId, previousId, target }: { pourId: string; previousId: string | null; target: TargetDetail }) {
+export function PourCompare({ pourId, previousId, target, tolerance }: { pourId: string; previousId: string | null; target: TargetDetail; tolerance?: number }) {
   const { data: pour, error } = useSWR<PourView>(`/api/pours/${pourId}`, swrFetcher);
   const { data: previous } = useSWR<PourView>(previousId ? `/api/pours/${previousId}` : null, swrFetcher);
   const [surround, setSurround] = useState<Surround>('grey');
@@ -33,7 +33,7 @@ export function PourCompare({ pourId, previousId, target }: { pourId: string; pr
             <h4 className="mb-2 font-semibold capitalize">{z.name}</h4>
             <SwatchPair surround={surround} left={z.target.hex} right={z.hex} leftLabel="target" rightLabel={`pour #${pour.number}`} />
           </div>
-          <ZoneReadout zone={z} targetFlake={target.zones.find((t) => t.name === z.name)?.flakeCoverage ?? null} />
+          <ZoneReadout zone={z} targetFlake={target.zones.find((t) => t.name === z.name)?.flakeCoverage ?? null} tolerance={tolerance} />
         </div>
       ))}
       <NextPourHint pourId={pour.id} />

@@ -3,6 +3,8 @@
 import Link from 'next/link';
 import { useState } from 'react';
 import { DeltaReadout } from '@/components/color/delta-readout';
+import { InFrameLine, LightLine } from '@/components/color/measure-notes';
+import { verdictWords } from '@/components/color/verdict-words';
 import { SurroundToggle, SwatchPair, type Surround } from '@/components/color/swatch-pair';
 import { RegionsOnPhoto } from '@/components/match/regions-on-photo';
 import type { BatchView } from '@/db/queries/batches';
@@ -51,8 +53,10 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
             <SwatchPair surround={surround} left={z.standard?.hex ?? '#777777'} right={z.hex} leftLabel={`standard #${batch.standardPourNumber}`} rightLabel="batch" />
           </div>
           <div className="space-y-1 text-sm">
-            <DeltaReadout d={z} direction={z.direction?.text} extra={<span className="font-medium">{z.withinTolerance ? 'within tolerance' : 'over tolerance'}</span>} />
+            <DeltaReadout d={z} direction={z.direction?.text} uncertainty={z.uncertainty} extra={<span className="font-medium">{verdictWords(z.dE00, batch.tolerance, z.uncertainty).text}</span>} />
+            <InFrameLine inFrame={z.inFrame as never} />
             <p className="num text-ink-soft">Batch {lab(z.lab)}{z.standard ? ` · standard ${lab(z.standard.lab)}` : ''}</p>
+            <LightLine light={z.whiteBalance as never} />
           </div>
         </div>
       ))}

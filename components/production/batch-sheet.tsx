@@ -3,8 +3,10 @@ import { SAFETY_CAUTIONS, TEMPERATURE_CAUTION } from '@/lib/batches/safetyCautio
 import { amount, volume } from './dose';
 import { SheetCost, SheetPlan, SheetStock } from './sheet-production';
 import { PassBadge } from './pass-badge';
+import { SheetQc } from './sheet-qc';
 import { PrintButton } from './print-button';
 import { type Sheet, SheetMolds, SheetRecipe } from './sheet-tables';
+import { ThicknessRedose } from './thickness-redose';
 import { day } from './when';
 
 const box = 'rounded-lg border border-panel-line bg-white p-4';
@@ -48,6 +50,7 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
           <Item label="Tolerance"><span className="num">{sheet.match.tolerance.toFixed(1)} ΔE00</span></Item>
           <Item label="Baits counted"><span className="num">{sheet.batch.baits ?? '____'}</span></Item>
         </dl>
+        <SheetQc sheet={sheet} />
       </header>
 
       <section aria-labelledby="sheet-safety" className={`${box} sheet-keep border-2 border-ink`}>
@@ -70,6 +73,7 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
         <h2 id="sheet-recipe" className="text-lg font-semibold">Recipe for this batch</h2>
         <SheetRecipe sheet={sheet} />
       </section>
+      {sheet.thicknessRedose ? <ThicknessRedose redose={sheet.thicknessRedose} /> : null}
 
       <section aria-labelledby="sheet-layout" className={`${box} sheet-keep`}>
         <h2 id="sheet-layout" className="text-lg font-semibold">{sheet.laminate ? `Laminate: ${sheet.order}` : 'Colour'}</h2>

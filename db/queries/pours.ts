@@ -79,7 +79,25 @@ export function sampleFigures(s: Sample) {
     glare: s.glare,
     flake: s.flake,
     whiteBalance: s.whiteBalance,
+    // The ± (ΔE00, about 95 %) of dE00 from both measurements; null for samples measured before it existed.
+    uncertainty: s.dE00Uncertainty,
+    regionUncertainty: s.uncertainty,
+    shading: s.shading,
+    other: s.other,
+    inFrame: s.inFrame,
   };
+}
+
+// Per zone, the ± of a match's target colour: the mean of its target samples' uncertainties.
+export function targetUncertainties(database: DB, teamId: string, matchId: string): Map<string, number> {
+  const rows = database
+    .select({ zone: samples.zone, u: samples.uncertainty })
+    .from(samples)
+    .where(and(eq(samples.teamId, teamId), eq(samples.matchId, matchId), eq(samples.purpose, 'target')))
+    .all();
+  const by = new Map<string, number[]>();
+  for (const r of rows) if (r.u !== null) by.set(r.zone, [...(by.get(r.zone) ?? []), r.u]);
+  return new Map([...by].map(([zone, us]) => [zone, us.reduce((a, b) => a + b, 0) / us.length]));
 }
 
 export type PourView = NonNullable<ReturnType<typeof getPour>>;

@@ -9,7 +9,7 @@ import { ApiError } from '@/lib/http/api';
 import { queueMail } from '@/lib/mail/queue';
 import { batchFailedMail } from '@/lib/mail/templates-production';
 import { loadMatch } from '@/lib/matches/loadMatch';
-import { measureZones } from '@/lib/matches/measureZones';
+import { comparedExtras, measureZones } from '@/lib/matches/measureZones';
 import { moldYield, splitZoneCups, zoneCupsProblem } from '@/lib/recipes';
 import { moveStock } from '@/lib/stock/moveStock';
 import { batchMaterials, defaultBase, getBase } from './batchMaterials';
@@ -77,7 +77,10 @@ export async function logBatch(database: DB, member: Member, matchId: string, in
   const measured = await measureZones(database, teamId, input.photoId, input.zones, input.neutral);
   const figures = measured.regions.map((r, i) => {
     const s = std.find((x) => x.zone === r.name)!;
-    return { region: r, shape: input.zones[i]!.shape, cmp: compareLab({ l: s.l, a: s.a, b: s.b }, r.lab, match.tolerance) };
+    return {
+      region: r, shape: input.zones[i]!.shape, cmp: compareLab({ l: s.l, a: s.a, b: s.b }, r.lab, match.tolerance),
+      extras: comparedExtras(r, s.uncertainty ?? null, measured.references[r.name], input.zones[i]!.reference, match.tolerance),
+    };
   });
   const pass = figures.every((f) => f.cmp.withinTolerance);
   const id = newId();
@@ -97,13 +100,13 @@ export async function logBatch(database: DB, member: Member, matchId: string, in
     for (const d of draws) {
       if (d.amount > 0) moveStock(tx, { teamId, colorantId: d.colorantId, kind: 'batch', amount: -d.amount, batchId: id, createdBy: member.user.id });
     }
-    for (const { region: r, shape, cmp } of figures) {
+    for (const { region: r, shape, cmp, extras } of figures) {
       tx.insert(samples)
         .values({
           id: newId(), teamId, photoId: input.photoId, purpose: 'batch', matchId, batchId: id, zone: r.name, shape,
           neutral: input.neutral ?? null, l: r.lab.l, a: r.lab.a, b: r.lab.b, hex: r.hex, pixels: r.pixels, kept: r.kept,
           spread: r.spread, glare: r.glare, flake: r.flake, whiteBalance: measured.whiteBalance,
-          dE00: cmp.dE00, dL: cmp.dL, dC: cmp.dC, dH: cmp.dH,
+          dE00: cmp.dE00, dL: cmp.dL, dC: cmp.dC, dH: cmp.dH, ...extras,
         })
         .run();
     }

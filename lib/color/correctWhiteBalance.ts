@@ -8,7 +8,7 @@ import { D65 } from './whitePoints';
 
 export interface WhiteBalance {
   method: 'bradford';
-  /** Linear sRGB → corrected XYZ (D65): the adaptation folded into SRGB_TO_XYZ. */
+  /** Linear RGB → corrected XYZ (D65): the adaptation folded into the photo's RGB → XYZ matrix. */
   toXyz: Mat3;
   /** The adaptation alone, XYZ → XYZ. */
   adaptation: Mat3;
@@ -33,13 +33,13 @@ export interface WhiteBalance {
  * With the card's nominal L* the destination white is scaled so the patch reads exactly
  * (nominalL, 0, 0): exposure is corrected as well.
  */
-export function correctWhiteBalance(patchLinearRgb: Vec3, nominalL?: number): WhiteBalance {
-  const patchXyz = applyMat3(SRGB_TO_XYZ, patchLinearRgb);
+export function correctWhiteBalance(patchLinearRgb: Vec3, nominalL?: number, rgbToXyz: Mat3 = SRGB_TO_XYZ): WhiteBalance {
+  const patchXyz = applyMat3(rgbToXyz, patchLinearRgb);
   if (!(patchXyz[1] > 0) || patchLinearRgb.some((v) => !(v > 0))) {
     throw new RangeError('the neutral patch is black in at least one channel; it cannot set the white');
   }
   const targetY = nominalL === undefined ? patchXyz[1] : lightnessToY(nominalL);
   const dstWhite: Vec3 = [D65[0] * targetY, D65[1] * targetY, D65[2] * targetY];
   const adaptation = bradfordMatrix(patchXyz, dstWhite);
-  return { method: 'bradford', toXyz: multiplyMat3(adaptation, SRGB_TO_XYZ), adaptation, patchXyz };
+  return { method: 'bradford', toXyz: multiplyMat3(adaptation, rgbToXyz), adaptation, patchXyz };
 }

@@ -1,13 +1,15 @@
 import sharp, { type OutputInfo } from 'sharp';
-import type { PixelBox, PixelWindow } from '@/lib/color';
+import { type PixelBox, type PixelWindow, parseIccProfile, type RgbProfile, SRGB8_TO_LINEAR, SRGB_TO_XYZ } from '@/lib/color';
 import { ImageError } from './imageError';
 import { type ImageHeader, inspectImage, MAX_IMAGE_PIXELS } from './inspectImage';
 
 // Server-side only (sharp is native); kept free of React and Next so tests can import it.
 
 export interface DecodedImage extends ImageHeader {
-  /** 8-bit sRGB pixels, alpha dropped, of `crop` (or the whole image) in displayed coordinates. */
+  /** 8-bit device pixels (in `profile`'s own RGB), alpha dropped, of `crop` (or the whole image) in displayed coordinates. */
   window: PixelWindow;
+  /** How the window's code values turn into linear light and XYZ (D65). */
+  profile: RgbProfile;
 }
 
 export interface DecodeOptions {
@@ -20,12 +22,26 @@ export interface DecodeOptions {
 const DECODE_MESSAGE =
   "This image couldn't be decoded: it looks cut short or damaged. Upload the original file again.";
 
+/** IEC 61966-2-1 sRGB: the profile of untagged photos and of sRGB-tagged ones. */
+export const SRGB_PROFILE: RgbProfile = { linear: [SRGB8_TO_LINEAR, SRGB8_TO_LINEAR, SRGB8_TO_LINEAR], toXyz: SRGB_TO_XYZ };
+
+// A tagged profile within ICC's s15Fixed16 rounding of sRGB is read as exact sRGB, so an sRGB
+// photo measures the same with or without its tag.
+function isSrgb(p: RgbProfile): boolean {
+  const m = p.toXyz.flat().every((v, k) => Math.abs(v - SRGB_TO_XYZ[Math.floor(k / 3)][k % 3]) < 2e-3);
+  return m && p.linear.every((t) => t.every((v, i) => Math.abs(v - SRGB8_TO_LINEAR[i]) < 2e-4));
+}
+
 /**
- * Decodes an upload to 8-bit sRGB: EXIF orientation applied (autoOrient), an embedded ICC
- * profile converted to sRGB (toColourspace('srgb') through the profile; Display P3 checked in
- * tests/color/decodeImage.test.ts), alpha dropped. Size, type and pixel count are checked from the
- * header first (inspectImage); sharp's limitInputPixels guards the decode as well, and the default
- * failOn ('warning') rejects truncated or damaged data.
+ * Decodes an upload in its own colour space: EXIF orientation applied (autoOrient), alpha dropped,
+ * and the 8-bit code values left as the camera wrote them (ignoreIcc) when the embedded profile is
+ * of the matrix/TRC kind (parseIccProfile: sRGB, Display P3, Adobe RGB…). The caller turns them
+ * into linear light and XYZ through `profile` in floating point, so a Display-P3 colour outside
+ * sRGB keeps its value instead of being clipped to the sRGB gamut by an 8-bit conversion. Any
+ * other profile (LUT-based) is converted to sRGB by sharp (toColourspace('srgb')).
+ * Size, type and pixel count are checked from the header first (inspectImage); sharp's
+ * limitInputPixels guards the decode as well, and the default failOn ('warning') rejects truncated
+ * or damaged data.
  */
 export async function decodeImage(buf: Buffer, options: DecodeOptions = {}): Promise<DecodedImage> {
   const header = options.header ?? (await inspectImage(buf));
@@ -36,13 +52,18 @@ export async function decodeImage(buf: Buffer, options: DecodeOptions = {}): Pro
   ) {
     throw new RangeError('crop box outside the image');
   }
+  const own = header.icc ? parseIccProfile(header.icc) : null;
+  const keep = own !== null;
+  const profile = own && !isSrgb(own) ? own : SRGB_PROFILE;
 
   let data: Buffer;
   let info: OutputInfo;
   try {
     const whole = crop.width === header.width && crop.height === header.height;
-    let img = sharp(buf, { limitInputPixels: MAX_IMAGE_PIXELS, autoOrient: true });
+    let img = sharp(buf, { limitInputPixels: MAX_IMAGE_PIXELS, autoOrient: true, ignoreIcc: keep });
     if (!whole) img = img.extract(crop);
+    // With ignoreIcc this only brings 16-bit or grey pixels to 8-bit RGB; without it, it converts
+    // through the embedded profile.
     ({ data, info } = await img
       .toColourspace('srgb')
       .removeAlpha()
@@ -61,5 +82,6 @@ export async function decodeImage(buf: Buffer, options: DecodeOptions = {}): Pro
   return {
     ...header,
     window: { ...crop, data: new Uint8Array(data.buffer, data.byteOffset, data.length) },
+    profile,
   };
 }

@@ -11,6 +11,8 @@ export interface ImageHeader {
   /** Size of the image as displayed (EXIF orientation applied). */
   width: number;
   height: number;
+  /** The embedded ICC profile, if any. */
+  icc?: Buffer;
 }
 
 const TYPE_MESSAGE = "This file isn't a JPEG, PNG or WebP image we can read. Upload a JPEG, PNG or WebP photo.";
@@ -72,5 +74,6 @@ export async function inspectImage(buf: Buffer): Promise<ImageHeader> {
     format: meta.format,
     width: meta.autoOrient?.width ?? (swap ? height : width),
     height: meta.autoOrient?.height ?? (swap ? width : height),
+    ...(meta.icc ? { icc: meta.icc } : {}),
   };
 }

@@ -2,6 +2,7 @@ import { and, eq, inArray, isNull, max } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { Member } from '@/db/queries/members';
 import { colorants, matches, molds, pours, recipeLines, samples, teams } from '@/db/schema';
+import { targetUncertainties } from '@/db/queries/pours';
 import { compareLab } from '@/lib/color';
 import { recordAudit } from '@/lib/audit';
 import { newId } from '@/lib/auth/tokens';
@@ -11,7 +12,7 @@ import { defaultBase } from '@/lib/batches/batchMaterials';
 import { batchDraws, splitZoneCups } from '@/lib/recipes';
 import { moveStock } from '@/lib/stock/moveStock';
 import { assertZonesOfMatch, loadMatch } from './loadMatch';
-import { measureZones } from './measureZones';
+import { comparedExtras, measureZones } from './measureZones';
 
 // Measures a test pour's photo and stores it as the match's next numbered
 // pour, with its recipe and ΔE00 per zone against the target. A pour is never
@@ -44,6 +45,7 @@ export async function addPour(database: DB, member: Member, matchId: string, inp
     throw new ApiError(400, 'invalid_body', 'correctsPourId: no such pour in this match');
   }
   const measured = await measureZones(database, teamId, input.photoId, input.zones, input.neutral);
+  const targetU = targetUncertainties(database, teamId, matchId);
   const id = newId();
   const draws = pourDraws(database, teamId, input, zoneRows.map((z) => z.name));
   database.transaction((tx) => {
@@ -65,6 +67,7 @@ export async function addPour(database: DB, member: Member, matchId: string, inp
           shape: input.zones[i]!.shape, neutral: input.neutral ?? null, l: r.lab.l, a: r.lab.a, b: r.lab.b, hex: r.hex,
           pixels: r.pixels, kept: r.kept, spread: r.spread, glare: r.glare, flake: r.flake, whiteBalance: measured.whiteBalance,
           dE00: cmp.dE00, dL: cmp.dL, dC: cmp.dC, dH: cmp.dH,
+          ...comparedExtras(r, targetU.get(r.name) ?? null, measured.references[r.name], input.zones[i]!.reference, match.tolerance),
         })
         .run();
     });

@@ -33,6 +33,7 @@ export async function setTarget(database: DB, member: Member, matchId: string, i
           id: newId(), teamId: member.team.id, photoId: input.photoId, purpose: 'target', matchId, zone: r.name,
           shape: input.zones[i]!.shape, neutral: input.neutral ?? null, l: r.lab.l, a: r.lab.a, b: r.lab.b, hex: r.hex,
           pixels: r.pixels, kept: r.kept, spread: r.spread, glare: r.glare, flake: r.flake, whiteBalance: measured.whiteBalance,
+          uncertainty: r.uncertainty, shading: r.shading, other: r.other,
         })
         .run();
     });

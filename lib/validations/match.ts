@@ -31,6 +31,8 @@ export type CreateMatchInput = z.infer<typeof createMatchSchema>;
 export const idField = z.string({ error: 'must be an id' }).min(1, 'must be an id').max(64, 'is not a valid id');
 
 export const zoneRegionSchema = z.object({ name: zoneName, shape: shapeSchema });
+/** A zone of a pour or batch may also mark the same zone of a physical reference in the same photo. */
+export const comparedZoneSchema = zoneRegionSchema.extend({ reference: shapeSchema.optional() });
 
 export const neutralSchema = z.object({
   shape: shapeSchema,
@@ -66,7 +68,11 @@ export const pourSchema = z.object({
   tempF: z.number({ error: 'tempF must be a number' }).min(32, 'tempF must be at least 32 °F').max(500, 'tempF must be at most 500 °F').optional().nullable(),
   notes: z.string().max(4000, 'notes must be at most 4000 characters').optional().nullable(),
   correctsPourId: idField.optional().nullable(),
-  zones: zoneRegions,
+  zones: z
+    .array(comparedZoneSchema, { error: 'zones must be a list of { name, shape, reference? }' })
+    .min(1, 'mark at least one zone')
+    .max(16, 'at most 16 zones')
+    .refine((zs) => new Set(zs.map((z) => z.name)).size === zs.length, 'each zone may be marked once'),
   neutral: neutralSchema.optional(),
 });
 

@@ -62,6 +62,11 @@ describe('POST /api/measure', () => {
     expect(r.hex).toMatch(/^#[0-9a-f]{6}$/);
     expect(r.pixels).toBeGreaterThan(0);
     expect(r.flake).toMatchObject({ coverage: expect.any(Number), groups: expect.any(Array) });
+    // API.md's ± and the new figures: an evenly lit, single-colour region with no card.
+    expect(r.uncertainty).toBeGreaterThan(0);
+    expect(r.uncertainty).toBeLessThan(1);
+    expect(r).toMatchObject({ shading: 0, other: null });
+    expect(res.body.whiteBalance).toMatchObject({ cast: 0, warning: null });
   });
 
   it('answers each kind of bad input with its status and a clear message, and keeps serving', async () => {

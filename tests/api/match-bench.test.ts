@@ -75,6 +75,10 @@ describe('match bench API: target, numbered pours, ΔE00 per zone', () => {
         const expected = de00(lab65(t.l, t.a, t.b), lab65(p.l, p.a, p.b));
         expect(Math.abs(z.dE00 - expected), `${zone}: ${z.dE00} vs ${expected}`).toBeLessThanOrEqual(0.5);
         expect(['indistinguishable', 'close', 'noticeable', 'off']).toContain(z.band);
+        // API.md: the ± of dE00 from both measurements, and no in-frame reference marked.
+        expect(z.uncertainty).toBeGreaterThan(0);
+        expect(z.uncertainty).toBeLessThan(1.5);
+        expect(z.inFrame).toBeNull();
       }
       expect(pour.body.recipe).toEqual([expect.objectContaining({ zone: 'back', colorantId, amount: 6, unit: 'drops' })]);
       const again = await api(`/api/pours/${pour.body.id}`, { cookie: maker });
@@ -82,8 +86,24 @@ describe('match bench API: target, numbered pours, ΔE00 per zone', () => {
       expect(again.body.number).toBe(pour.body.number);
     }
     expect(numbers).toEqual([1, 2]);
+
+    // The reference in frame: the back zone compared with a region of the same photo (here the
+    // belly half stands in for a reference bait lying beside the pour).
+    const photo3 = await uploadPhoto(maker, await twoTonePng(POUR2.back, TARGET.back), 'pour');
+    const pour3 = await api(`/api/matches/${matchId}/pours`, {
+      cookie: maker,
+      body: { photoId: photo3.id, recipe: [], zones: [{ name: 'back', shape: BACK_SHAPE, reference: BELLY_SHAPE }] },
+    });
+    expect(pour3.status).toBe(201);
+    const z3 = pour3.body.zones.find((x: any) => x.name === 'back');
+    const ref3 = labOf(TARGET.back);
+    const own3 = labOf(POUR2.back);
+    expect(de00(lab65(ref3.l, ref3.a, ref3.b), lab65(z3.inFrame.lab.l, z3.inFrame.lab.a, z3.inFrame.lab.b))).toBeLessThanOrEqual(1.0);
+    expect(Math.abs(z3.inFrame.dE00 - de00(lab65(ref3.l, ref3.a, ref3.b), lab65(own3.l, own3.a, own3.b)))).toBeLessThanOrEqual(0.5);
+    expect(z3.inFrame).toMatchObject({ dL: expect.any(Number), dC: expect.any(Number), dH: expect.any(Number), band: expect.any(String) });
+    expect((await api(`/api/pours/${pour3.body.id}`, { cookie: maker })).body.zones[0].inFrame.dE00).toBeCloseTo(z3.inFrame.dE00, 9);
     const match = await api(`/api/matches/${matchId}`, { cookie: maker });
-    expect(match.body.pours.map((p: any) => p.number)).toEqual([1, 2]);
+    expect(match.body.pours.map((p: any) => p.number)).toEqual([1, 2, 3]);
 
     // A viewer may read but not pour; another shop sees nothing.
     const viewer = await signInAs('viewer@demo.test', 'pourproof-demo', '10.60.0.2');
@@ -111,7 +131,7 @@ describe('match bench API: target, numbered pours, ΔE00 per zone', () => {
       expectErrorShape(res.body);
       expect(res.body.error.message).toMatch(field);
     }
-    expect((await api(`/api/matches/${matchId}`, { cookie: maker })).body.pours).toHaveLength(2);
+    expect((await api(`/api/matches/${matchId}`, { cookie: maker })).body.pours).toHaveLength(3);
   });
 });
 

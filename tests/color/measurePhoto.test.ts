@@ -25,7 +25,7 @@ describe('measurePhoto: flat patches', () => {
     expect(m.kept).toBe(m.pixels);
     expect(m.glare).toBe(0);
     expect(m.flake.coverage).toBe(0);
-    expect(m.spread).toBeLessThan(1e-9);
+    expect(m.spread).toBeLessThan(1e-5); // per-pixel colours are held in 32-bit floats
   });
 
   it.each(colours)('JPEG q90 of (%i, %i, %i) measures its own Lab within ΔE00 1.0', async (r, g, b) => {

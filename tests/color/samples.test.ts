@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { deltaE2000, measureRegion, packedRgbToLab, regionColors, shapeSpans, srgbToLab, weightedMedian } from '@/lib/color';
+import { deltaE2000, measureRegion, packedRgbToLab, regionColors, regionPixels, shapeSpans, srgbToLab, weightedMedian } from '@/lib/color';
 import { measurePhoto } from '@/lib/image';
 import { encode, gauss, rawImage, rng, type Rgb } from './synth';
 
@@ -70,24 +70,32 @@ describe('lattice sampling in measurePhoto', () => {
   });
 });
 
-describe('measureRegion on a hand-made sample set', () => {
-  it('keeps the base, calls the far colour flake and the white glare', () => {
-    // 900 px base, 80 px dark flake, 20 px clipped white, as distinct samples with counts.
-    const rgb = new Uint8Array([100, 150, 60, 101, 149, 61, 20, 20, 30, 255, 255, 255]);
-    const counts = new Uint32Array([500, 400, 80, 20]);
-    const m = measureRegion({ rgb, lab: packedRgbToLab(rgb, 4), counts, size: 4, total: 1000, pixels: 1000 });
-    expect(m.kept).toBe(900);
-    expect(m.glare).toBeCloseTo(0.02, 12);
-    expect(m.flake.coverage).toBeCloseTo(0.08, 12);
+describe('measureRegion on a hand-made window', () => {
+  it('keeps the base, calls the dark specks flake by area and the clipped streak glare', () => {
+    // 40 × 25 px: base everywhere, a 20 × 3 px clipped streak on rows 0–2, twenty 2 × 2 dark specks.
+    const W = 40, H = 25;
+    const base: Rgb = [100, 150, 60];
+    const data = new Uint8Array(W * H * 3);
+    for (let i = 0; i < W * H; i++) data.set(base, i * 3);
+    for (let y = 0; y < 3; y++) for (let x = 0; x < 20; x++) data.set([255, 255, 255], (y * W + x) * 3);
+    let specks = 0;
+    for (let y = 6; y < H - 2; y += 5)
+      for (let x = 2; x < W - 2 && specks < 20; x += 6, specks++)
+        for (const [dx, dy] of [[0, 0], [1, 0], [0, 1], [1, 1]]) data.set([20, 20, 30], ((y + dy) * W + x + dx) * 3);
+    expect(specks).toBe(20);
+    const spans = shapeSpans({ type: 'rect', x: 0, y: 0, w: 1, h: 1 }, W, H);
+    const rp = regionPixels({ data, left: 0, top: 0, width: W, height: H }, spans);
+    expect(rp.samples.size).toBe(3);
+    const m = measureRegion(rp);
+    // Glare: the streak alone (its neighbours are no lighter than the base, so no fringe).
+    expect(m.glare).toBeCloseTo(60 / 1000, 12);
+    expect(m.flake.coverage).toBeCloseTo(80 / 1000, 9);
+    expect(m.kept).toBe(1000 - 60 - 80);
     expect(m.flake.groups).toHaveLength(1);
-    expect(m.flake.groups[0].share).toBeCloseTo(1, 12);
-    const mean = { l: 0, a: 0, b: 0 };
-    for (const [i, w] of [[0, 500], [1, 400]]) {
-      const lab = srgbToLab(rgb[i * 3], rgb[i * 3 + 1], rgb[i * 3 + 2]);
-      mean.l += (lab.l * w) / 900;
-      mean.a += (lab.a * w) / 900;
-      mean.b += (lab.b * w) / 900;
-    }
-    expect(deltaE2000(m.lab, mean)).toBeLessThan(1e-9);
+    // Per-pixel colours are held in 32-bit floats: agreement to about 1e-5.
+    expect(deltaE2000(m.flake.groups[0].lab, srgbToLab(20, 20, 30))).toBeLessThan(1e-5);
+    expect(deltaE2000(m.lab, srgbToLab(...base))).toBeLessThan(1e-5);
+    expect(m.shading).toBe(0);
+    expect(m.other).toBeNull();
   });
 });
