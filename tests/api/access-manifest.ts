@@ -67,7 +67,6 @@ export const ROUTES: RouteEntry[] = [
   { method: 'POST', path: '/api/matches/:id/starting-recipe', role: 'viewer', id: 'match', body: {} },
   { method: 'POST', path: '/api/matches/:id/archive', role: 'lead', id: 'match' },
   { method: 'POST', path: '/api/matches/:id/reopen', role: 'lead', id: 'match' },
-  { method: 'POST', path: '/api/matches/:id/starting-recipe', role: 'viewer', id: 'match', body: {} },
   { method: 'GET', path: '/api/pours/:id', role: 'viewer', id: 'pour' },
   { method: 'GET', path: '/api/pours/:id/suggestion', role: 'viewer', id: 'pour' },
   { method: 'POST', path: '/api/pours/:id/submit', role: 'maker', id: 'pour', body: {} },
