@@ -1,6 +1,6 @@
 'use client';
 
-import { useCallback, useEffect, useState } from 'react';
+import { useCallback, useEffect, useMemo, useState } from 'react';
 import { PhotoSampler, NEUTRAL } from '@/components/sampler/photo-sampler';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
@@ -14,7 +14,6 @@ const ZONE = 'region';
 // "Measure", which sends it with the drawn region to /api/measure.
 export function PhotoCheck() {
   const [file, setFile] = useState<File | null>(null);
-  const [url, setUrl] = useState<string | null>(null);
   const [size, setSize] = useState<{ w: number; h: number } | null>(null);
   const [shapes, setShapes] = useState<Record<string, Shape>>({});
   const [result, setResult] = useState<MeasureResult | null>(null);
@@ -22,16 +21,17 @@ export function PhotoCheck() {
   const [busy, setBusy] = useState(false);
   const onShapes = useCallback((s: Record<string, Shape>) => setShapes(s), []);
 
+  // The chosen file as a URL the sampler can show; let go of when the file changes.
+  const url = useMemo(() => (file ? URL.createObjectURL(file) : null), [file]);
   useEffect(() => {
-    if (!file) return;
-    const u = URL.createObjectURL(file);
-    setUrl(u);
+    if (!url) return;
+    const u = url;
     const img = new Image();
     img.onload = () => setSize({ w: img.naturalWidth, h: img.naturalHeight });
     img.onerror = () => setError('This file does not open as a picture here. Use a JPEG, PNG or WebP photo.');
     img.src = u;
     return () => URL.revokeObjectURL(u);
-  }, [file]);
+  }, [url]);
 
   async function run() {
     if (!file || !shapes[ZONE]) return;

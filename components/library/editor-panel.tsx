@@ -29,17 +29,17 @@ export function useEditor(openAtStart: boolean) {
 export type Editor = ReturnType<typeof useEditor>;
 
 export function EditorPanel({ editor, addLabel, editTitle, children }: { editor: Editor; addLabel: string; editTitle: string | null; children: ReactNode }) {
-  const { mode } = editor;
+  const { mode, ref } = editor;
   const editingGone = typeof mode === 'object' && !editTitle;
   if (mode === 'closed' || editingGone) {
     return (
-      <div ref={editor.ref}>
+      <div ref={ref}>
         <Button type="button" onClick={editor.add}>{addLabel}</Button>
       </div>
     );
   }
   return (
-    <div ref={editor.ref} className="scroll-mt-4 rounded-lg border border-panel-line bg-white p-4">
+    <div ref={ref} className="scroll-mt-4 rounded-lg border border-panel-line bg-white p-4">
       <h2 className="mb-3 text-lg font-semibold">{mode === 'add' ? addLabel : editTitle}</h2>
       {children}
     </div>

@@ -43,7 +43,7 @@ export function MoldForm({ mold, onSaved, onCancel }: { mold?: MoldView; onSaved
     fields: FIELDS,
     setFieldError,
     onSaved,
-    afterAdd: (v) => {
+    afterAdd: () => {
       reset(emptyValues());
       setFocus('name');
     },

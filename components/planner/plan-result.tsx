@@ -1,5 +1,5 @@
 import Link from 'next/link';
-import { formatDose, formatVolume } from '@/lib/format';
+import { formatDose, formatMl, formatVolume } from '@/lib/format';
 import { encodeBatchPrefill, ML_PER_CUP, VOLUME_LABEL, type RunPlan, type VolumeUnit } from '@/lib/recipes';
 import type { PlannerStandard } from './run-planner';
 import { PlanMaterials, type PlannerColorant } from './plan-materials';
@@ -8,7 +8,7 @@ export type Shelf = { colorants: PlannerColorant[]; baseId: string | null; curre
 
 const th = 'border-b border-panel-line p-2 text-left font-semibold';
 const td = 'border-b border-panel-line p-2 align-top';
-const mlOf = (ml: number) => `${ml.toFixed(0)} mL`;
+const mlOf = formatMl;
 
 // What a run plan comes to: yield per mold and in all, plastisol per side
 // with its scaled recipe, sprue and leftover, and a link that opens the batch

@@ -20,7 +20,7 @@ import type { NeutralMark } from '@/db/queries/light';
 import type { MatchDetail } from '@/db/queries/matchDetail';
 import type { UploadedPhoto } from '@/lib/uploads/limits';
 import { MAX_BAITS, MAX_BATCH_CUPS } from '@/lib/validations/production';
-import { trimmed } from '@/lib/format';
+import { formatMl, trimmed } from '@/lib/format';
 import { BatchRunFields } from './batch-run-fields';
 
 type Mold = { id: string; name: string; cavities: number; mlPerCavity: number };
@@ -151,7 +151,7 @@ function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefi
           hint={planBaits
             ? `Leave empty to use the run plan’s ${planBaits} baits.`
             : yieldHint
-            ? `Leave empty to use the mold’s yield: ${yieldHint.baits} baits (${yieldHint.shots} shots of ${yieldHint.mlPerShot.toFixed(1)} mL).`
+            ? `Leave empty to use the mold’s yield: ${yieldHint.baits} baits (${yieldHint.shots} shots of ${formatMl(yieldHint.mlPerShot)}).`
             : 'Leave empty to work it out from the mold and the batch size.'}
         >
           <input type="number" inputMode="numeric" step="1" min="0" className={inputClass} {...register('baitsExpected')} />

@@ -1,6 +1,6 @@
 import { money } from '@/components/library/format';
 import { ML_PER_CUP } from '@/lib/recipes/units';
-import { formatVolume, trimmed, unitLabel } from '@/lib/format';
+import { formatMl, formatVolume, trimmed, unitLabel } from '@/lib/format';
 import type { Sheet } from './sheet-tables';
 
 const th = 'border-b border-panel-line p-2 text-left font-semibold';
@@ -19,21 +19,21 @@ export function SheetPlan({ sheet }: { sheet: Sheet }) {
         <tbody>
           {plan.molds.map((m) => (
             <tr key={m.id}>
-              <td className={td}>{m.name}<span className="block text-xs">{m.cavities} × {m.mlPerCavity.toFixed(1)} mL{sheet.sprueAllowanceMl ? ` + ${trimmed(sheet.sprueAllowanceMl)} mL sprue` : ''} per shot</span></td>
+              <td className={td}>{m.name}<span className="block text-xs">{m.cavities} × {formatMl(m.mlPerCavity)}{sheet.sprueAllowanceMl ? ` + ${trimmed(sheet.sprueAllowanceMl)} mL sprue` : ''} per shot</span></td>
               <td className={`${td} num text-right text-base font-semibold`}>{m.shots}</td>
               <td className={`${td} num text-right`}>{m.baits}</td>
-              <td className={`${td} num text-right`}>{m.ml.toFixed(0)} mL</td>
+              <td className={`${td} num text-right`}>{formatMl(m.ml)}</td>
               <td className={`${td} hidden text-center print:table-cell`}><span aria-hidden className="inline-block h-4 w-4 border border-ink" /></td>
             </tr>
           ))}
-          <tr className="font-semibold"><td className={td}>In all</td><td className={`${td} num text-right`}>{plan.shots}</td><td className={`${td} num text-right`}>{plan.baits}</td><td className={`${td} num text-right`}>{plan.neededMl.toFixed(0)} mL</td><td className={`${td} hidden print:table-cell`} /></tr>
+          <tr className="font-semibold"><td className={td}>In all</td><td className={`${td} num text-right`}>{plan.shots}</td><td className={`${td} num text-right`}>{plan.baits}</td><td className={`${td} num text-right`}>{formatMl(plan.neededMl)}</td><td className={`${td} hidden print:table-cell`} /></tr>
         </tbody>
       </table>
       <p className="mt-1 text-sm">
         {plan.shortMl > 0
-          ? <span className="font-semibold"><span aria-hidden>▲ </span>The batch is {plan.shortMl.toFixed(0)} mL short of the plan: mix more or pour fewer shots.</span>
-          : `Left over after the plan: ${plan.leftoverMl.toFixed(0)} mL (${formatVolume(plan.leftoverMl / ML_PER_CUP, sheet.volumeUnit)}).`}
-        {' '}Sprue: {plan.sprueMl.toFixed(0)} mL of the total.
+          ? <span className="font-semibold"><span aria-hidden>▲ </span>The batch is {formatMl(plan.shortMl)} short of the plan: mix more or pour fewer shots.</span>
+          : `Left over after the plan: ${formatMl(plan.leftoverMl)} (${formatVolume(plan.leftoverMl / ML_PER_CUP, sheet.volumeUnit)}).`}
+        {' '}Sprue: {formatMl(plan.sprueMl)} of the total.
       </p>
     </div>
   );
@@ -48,7 +48,7 @@ export function SheetCost({ sheet }: { sheet: Sheet }) {
       <p><span className="font-semibold">Batch:</span> <span className="num">{c.complete ? '' : 'at least '}{price(c.total, c.currency)}</span>
         {c.perBait !== null ? <> · <span className="font-semibold">per bait:</span> <span className="num">{c.complete ? '' : 'at least '}{price(c.perBait, c.currency)}</span></> : null}</p>
       {c.molds.length ? (
-        <ul className="num">{c.molds.map((m) => <li key={m.id}>Per bait in {m.name}: {price(m.perBait, c.currency)} ({m.mlPerBait.toFixed(1)} mL a bait with its share of sprue)</li>)}</ul>
+        <ul className="num">{c.molds.map((m) => <li key={m.id}>Per bait in {m.name}: {price(m.perBait, c.currency)} ({formatMl(m.mlPerBait)} a bait with its share of sprue)</li>)}</ul>
       ) : null}
       {c.missing.length ? <p className="font-semibold"><span aria-hidden>▲ </span>No cost in the library for: {c.missing.join(', ')} — left out of these figures.</p> : null}
     </div>

@@ -1,5 +1,5 @@
 import type { loadBatchSheet } from '@/lib/batches/loadBatchSheet';
-import { formatDose, formatMl, formatVolume, trimmed, unitLabel } from '@/lib/format';
+import { formatDose, formatMl, formatVolume, trimmed } from '@/lib/format';
 
 export type Sheet = ReturnType<typeof loadBatchSheet>;
 const th = 'border-b border-panel-line p-2 text-left font-semibold';

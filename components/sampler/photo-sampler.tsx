@@ -113,7 +113,7 @@ export function PhotoSampler({ src, width, height, zones, initialShapes, withNeu
       <div ref={stage} className="overflow-hidden rounded-md bg-stage p-3" data-testid="sampler-stage">
         <div className="relative mx-auto w-full" style={{ maxWidth: `min(100%, ${Math.round((width / height) * 70)}vh)` }}>
           <div style={{ transform: `translate(${s.panX}px, ${s.panY}px) scale(${s.zoom})`, transformOrigin: 'center' }} className="relative">
-            {/* eslint-disable-next-line @next/next/no-img-element */}
+            {/* eslint-disable-next-line @next/next/no-img-element -- pixel-exact overlay on our own authenticated photo route; next/image would resize it */}
             <img ref={photo} src={src} alt="Photo being sampled" className="block h-auto w-full select-none" draggable={false} width={width} height={height} />
             <svg
               ref={surface}

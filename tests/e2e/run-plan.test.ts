@@ -32,8 +32,8 @@ describe.runIf(browserAvailable())('a run of three molds, planned on a phone and
     // = 5×40 + 3×26 + 4×21.2 = 362.8 mL; each side half of it, rounded up to ¼ cup: 1 cup each.
     await plan.getByText('50', { exact: true }).waitFor();
     const planText = (await plan.textContent())!;
-    expect(planText).toContain('363 mL');
-    expect(planText).toContain('back: 1 cup (237 mL)');
+    expect(planText).toContain('362.8 mL');
+    expect(planText).toContain('back: 1 cup (236.6 mL)');
     expect(planText).toContain('6 drops Pigment, moss');
     // What the run takes from the shelf and costs, before anything is poured.
     expect(planText).toContain('Pigment, moss: 8 drops of 200 on the shelf'); // 6 drops × 1 cup + 2 drops × 1 cup
@@ -75,7 +75,7 @@ describe.runIf(browserAvailable())('a run of three molds, planned on a phone and
     expect(sheetText).toContain('Cost per bait');
     expect(sheetText).toMatch(/USD 0\.\d+/);
     expect(sheetText).toContain('No cost in the library for: Flake, black');
-    expect(sheetText).toContain('its own cup: 1 cup (237 mL)');
+    expect(sheetText).toContain('its own cup: 1 cup (236.6 mL)');
     for (const m of [s.mold.name, craw.name, finesse.name]) expect(sheetText).toContain(m);
     await page.screenshot({ path: artifactPath('run-plan-sheet-390.png'), fullPage: true });
   });
