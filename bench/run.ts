@@ -1,8 +1,10 @@
 import path from 'node:path';
 import { buildApp } from '../scripts/build-app';
 import { buildIsStale } from '../scripts/build-stale';
+import { run } from '../scripts/run';
 import { runDeltaELoad } from './delta-e-load';
 import { runMeasureBench } from './measure';
+import { printNextPourSim } from './next-pour-sim';
 
 // `npm run bench`: figures and ratios measured in this one run. Nothing here
 // passes or fails; the targets are printed beside the figures.
@@ -14,6 +16,12 @@ async function main() {
   console.log(`  measurePhoto (decode + Lab + base/flake/glare): ${m.pipelineMs.toFixed(1)} ms`);
   console.log(`  sharp decode + extract to raw pixels:           ${m.sharpMs.toFixed(1)} ms`);
   console.log(`  ratio ${m.ratio.toFixed(2)} (target ≤ 1.5); every pixel, no lattice: ${m.exactMs.toFixed(1)} ms, ratio ${m.exactRatio.toFixed(2)}`);
+
+  console.log('\n== next pour on the simulated colorant system (30 targets, two zones each)');
+  printNextPourSim();
+  console.log('\n== next-pour suggestion on a large shop');
+  const s = await run(path.join(root, 'node_modules/.bin/tsx'), ['--conditions=react-server', path.join(root, 'bench/suggestion.ts')]);
+  if (s !== 0) process.exit(s);
 
   if (buildIsStale(root)) {
     console.log('\n== building the app for the load test');

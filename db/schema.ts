@@ -307,6 +307,25 @@ export const samples = sqliteTable(
   ],
 );
 
+// A calibration swatch: a known dose of one colorant per cup of the base plastisol (none, for a
+// swatch of the base alone), poured outside any match and measured from its photo. It feeds the
+// shop's colorant model (lib/color/fitColorantModel.ts) beside the pours.
+export const swatches = sqliteTable(
+  'swatches',
+  {
+    id: text('id').primaryKey(),
+    teamId: text('team_id').notNull().references(() => teams.id, { onDelete: 'cascade' }),
+    colorantId: text('colorant_id').notNull().references(() => colorants.id, { onDelete: 'cascade' }),
+    sampleId: text('sample_id').notNull().references(() => samples.id, { onDelete: 'cascade' }),
+    amount: real('amount').notNull(),
+    unit: text('unit', { enum: DOSE_UNITS }).notNull(),
+    notes: text('notes'),
+    createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: integer('created_at').notNull().default(now),
+  },
+  (t) => [index('swatches_team_idx').on(t.teamId), index('swatches_colorant_idx').on(t.colorantId)],
+);
+
 export const signOffs = sqliteTable(
   'sign_offs',
   {

@@ -1,20 +1,23 @@
 'use client';
 
 import useSWR from 'swr';
-import type { ZoneSuggestion } from '@/lib/matches/suggestNextPour';
+import { Button } from '@/components/ui/button';
+import type { PourSuggestion } from '@/lib/matches/suggestionTypes';
 import { swrFetcher } from '@/lib/http/client';
 
 const fmt = (v: number) => String(Number(v.toFixed(3)));
 const signed = (v: number) => `${v > 0 ? '+' : '−'}${fmt(Math.abs(v))}`;
 
-// The suggested next adjustment per zone, from the shop's own history of
-// pour-to-pour changes (lib/color/estimateColorantEffects.ts).
-export function NextPourHint({ pourId }: { pourId: string }) {
-  const { data, error } = useSWR<{ number: number; zones: ZoneSuggestion[] }>(`/api/pours/${pourId}/suggestion`, swrFetcher);
+// The suggested next doses per zone, from the shop's colorant model (lib/color/fitColorantModel.ts)
+// corrected by this match's own pours (lib/color/adviseZone.ts). With `onUse`, a button fills
+// the pour form's recipe lines with them; the maker can still change anything.
+export function NextPourHint({ pourId, onUse }: { pourId: string; onUse?: (advice: PourSuggestion) => void }) {
+  const { data, error } = useSWR<PourSuggestion>(`/api/pours/${pourId}/suggestion`, swrFetcher);
   if (error || !data) return null;
+  const usable = data.zones.some((z) => z.status === 'suggested');
   return (
     <section aria-label="Next pour" className="rounded-lg border border-panel-line bg-white p-3 text-sm">
-      <h4 className="font-semibold">Next pour: what to change</h4>
+      <h4 className="font-semibold">Next pour after #{data.number}: what to change</h4>
       <ul className="mt-2 space-y-2">
         {data.zones.map((z) => (
           <li key={z.zone}>
@@ -26,18 +29,23 @@ export function NextPourHint({ pourId }: { pourId: string }) {
                 <ul className="num mt-1 list-disc pl-5">
                   {z.changes.map((c) => (
                     <li key={c.colorantId + c.unit}>
-                      {c.colorant}: {fmt(c.from)} → <strong>{fmt(c.to)} {c.unit}</strong> per cup ({signed(c.to - c.from)})
+                      {c.colorant}: {c.from === 0 ? 'add' : fmt(c.from)} → <strong>{c.to === 0 ? 'leave out' : `${fmt(c.to)} ${c.unit}`}</strong> per cup ({signed(c.to - c.from)})
                     </li>
                   ))}
                 </ul>
-                <p className="text-ink-soft">Expected about {z.predicted.dE00.toFixed(1)} ΔE00 from the target (now {z.dE00.toFixed(1)}).</p>
+                {z.predicted ? <p className="text-ink-soft">Expected about {z.predicted.dE00.toFixed(1)} ΔE00 from the target (now {z.dE00.toFixed(1)}).</p> : null}
+                {z.reason ? <p className="text-ink-soft">{z.reason}</p> : null}
+                {z.learntFrom ? <p className="text-xs text-ink-soft">{z.learntFrom}</p> : null}
               </>
             ) : null}
           </li>
         ))}
       </ul>
+      {onUse && usable ? (
+        <Button type="button" variant="secondary" className="mt-2" onClick={() => onUse(data)}>Use these doses</Button>
+      ) : null}
       <p className="mt-2 text-xs text-ink-soft">
-        Learnt from how the colour moved between earlier pours of your shop when a dose changed. Small steps behave close to linearly; treat it as a guide for the next test pour, not a promise.
+        From a Kubelka–Munk model of how your shop&apos;s colorants colour its plastisol, learnt from every pour and swatch you logged and corrected by this match&apos;s own pours. A prediction for the next test pour, not a promise.
       </p>
     </section>
   );

@@ -19,7 +19,10 @@ import type { UploadedPhoto } from '@/lib/uploads/limits';
 import { parseAmount } from '@/lib/recipes/parseAmount';
 import { recipeLineSchema } from '@/lib/validations/match';
 import { CardCarriedNote } from './light-note';
+import type { PourSuggestion } from '@/lib/matches/suggestionTypes';
+import { NextPourHint } from './next-pour-hint';
 import { type ColorantOption, RecipeLines } from './recipe-lines';
+import { StartingRecipeButton } from './starting-recipe-button';
 
 const optionalNumber = (schema: z.ZodNumber) => z.preprocess((v) => (v === '' || Number.isNaN(v) ? undefined : v), schema.optional());
 // Batch size as a maker says it ("1 1/2", "¾"), through the one dose parser.
@@ -50,7 +53,7 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
   const [shapes, setShapes] = useState<Record<string, Shape>>(initialShapes);
   const [error, setError] = useState<string | null>(null);
   const onShapes = useCallback((s: Record<string, Shape>) => setShapes(s), []);
-  const { register, control, handleSubmit, setValue, formState } = useForm<PourFormValues>({
+  const { register, control, handleSubmit, setValue, getValues, formState } = useForm<PourFormValues>({
     resolver: zodResolver(formSchema),
     // The last pour's recipe, mold, size and temperature, ready to adjust.
     defaultValues: {
@@ -62,6 +65,19 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
     },
   });
   const missing = match.zones.filter((z) => !shapes[z]);
+  // The hint's changes applied to the lines as they stand: a line per changed colorant, none for 0.
+  const useAdvice = (advice: PourSuggestion) => {
+    let lines = getValues('recipe');
+    for (const z of advice.zones) {
+      if (z.status !== 'suggested') continue;
+      for (const c of z.changes) {
+        lines = lines.filter((l) => !(l.zone === z.zone && l.colorantId === c.colorantId && l.unit === c.unit));
+        if (c.to > 0) lines.push({ zone: z.zone, colorantId: c.colorantId, amount: c.to, unit: c.unit });
+      }
+    }
+    setValue('recipe', lines, { shouldDirty: true });
+  };
+  const useStart = (lines: PourFormValues['recipe']) => setValue('recipe', lines, { shouldDirty: true });
 
   const onSubmit = handleSubmit(async (v) => {
     setError(null);
@@ -93,6 +109,7 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
   if (!colorants || !molds) return <p role="status" className="text-ink-soft">Loading the colorant and mold libraries…</p>;
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate aria-label="New pour">
+      {previous ? <NextPourHint pourId={previous.id} onUse={useAdvice} /> : <StartingRecipeButton matchId={match.id} onUse={useStart} />}
       <RecipeLines control={control} register={register} setValue={setValue} errors={formState.errors} zones={match.zones} colorants={colorants} />
       <div className="grid gap-3 sm:grid-cols-3">
         <Field label="Mold">

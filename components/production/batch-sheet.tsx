@@ -6,6 +6,7 @@ import { SheetQc } from './sheet-qc';
 import { PrintButton } from './print-button';
 import { type Sheet, SheetMolds, SheetRecipe } from './sheet-tables';
 import { When } from '@/components/ui/when';
+import { ThicknessRedose } from './thickness-redose';
 
 const box = 'rounded-lg border border-panel-line bg-white p-4';
 
@@ -70,6 +71,7 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
         <h2 id="sheet-recipe" className="text-lg font-semibold">Recipe for this batch</h2>
         <SheetRecipe sheet={sheet} />
       </section>
+      {sheet.thicknessRedose ? <ThicknessRedose redose={sheet.thicknessRedose} /> : null}
 
       <section aria-labelledby="sheet-layout" className={`${box} sheet-keep`}>
         <h2 id="sheet-layout" className="text-lg font-semibold">{sheet.laminate ? `Laminate: ${sheet.order}` : 'Colour'}</h2>

@@ -5,6 +5,7 @@ import { getRecipe } from '@/db/queries/pours';
 import { molds, pours, teams, zones as zoneTable } from '@/db/schema';
 import { standardZones } from './logBatch';
 import { buildBatchSheet } from './buildBatchSheet';
+import { thicknessRedose } from '@/lib/matches/thicknessRedose';
 
 // The data of a batch's printable sheet: the batch, the standard it was
 // poured to, and the sheet arithmetic with the team's dropper and sprue
@@ -43,7 +44,13 @@ export function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
     selectedMoldId,
     tempF: std.tempF,
   });
+  // A standard poured in a mold of another thickness class: its recipe re-dosed, as a prediction.
+  const thicknessOf = (id: string | null) => (id ? database.select({ t: molds.thickness }).from(molds).where(and(eq(molds.id, id), eq(molds.teamId, teamId))).get()?.t ?? null : null);
+  const stdThickness = thicknessOf(std.moldId);
+  const sheetThickness = thicknessOf(selectedMoldId);
+  const redose = stdThickness && sheetThickness ? thicknessRedose(database, teamId, recipe, stdThickness, sheetThickness) : null;
   return {
+    thicknessRedose: redose,
     batch: { id: batch.id, createdAt: batch.createdAt, createdBy: batch.createdBy, pass: batch.pass, baits: batch.baits, baitsExpected: batch.baitsExpected, notes: batch.notes },
     match: { id: batch.matchId, name: batch.matchName, tolerance: batch.tolerance },
     // Per zone: ΔE00 (with its ±) against the standard and, when marked, against the reference in frame.

@@ -81,3 +81,44 @@ export interface LabComparison {
   band: Band;
   withinTolerance: boolean;
 }
+
+/** A logged colour with the doses per cup that made it (a pour's zone, or a colorant swatch). */
+export interface DoseObservation {
+  /** Dose per cup by colorant key (colorant id and unit). */
+  doses: Record<string, number>;
+  lab: Lab;
+  /** The mold's thickness class, when known (a thin body reads lighter for the same recipe). */
+  thickness?: 'thin' | 'standard' | 'thick';
+}
+
+/** One colorant's Kubelka–Munk coefficients per unit dose, per linear sRGB channel. */
+export interface ColorantCoefficients {
+  /** Absorption per unit dose, relative to the base plastisol's scattering. */
+  k: Vec3;
+  /** Scattering per unit dose, relative to the base plastisol's scattering. */
+  s: Vec3;
+  /** Logged colours in which this colorant was dosed. */
+  observations: number;
+  /** Median ΔE00 between the model and those logged colours. */
+  residual: number;
+}
+
+/** How the shop's colorants colour its plastisol (see fitColorantModel). */
+export interface ColorantModel {
+  /** The base plastisol's own K/S per channel (its scattering is the unit). */
+  base: Vec3;
+  colorants: Record<string, ColorantCoefficients>;
+  observations: number;
+  /** Median ΔE00 between the model and every logged colour. */
+  residual: number;
+  /** Dose factor per mold thickness class (standard = 1), with the logged colours behind it. */
+  thickness?: Record<'thin' | 'standard' | 'thick', { factor: number; observations: number }>;
+}
+
+/** A match's own correction of the shop's model (see localCorrection). */
+export interface LocalCorrection {
+  /** Offset of log(K/S) per channel. */
+  offset: Vec3;
+  /** Factor on every dose: this match's colorants act this much stronger than the shop's. */
+  scale: number;
+}

@@ -41,6 +41,9 @@ describe.runIf(browserAvailable())('browser: a whole match on the bench', () => 
     for (const [i, colours] of POURS.entries()) {
       await page.getByRole('button', { name: 'New pour' }).click();
       const form = page.getByRole('form', { name: 'New pour' });
+      // Before the first pour the form offers a starting recipe; after it, the next-pour hint.
+      if (i === 0) await form.getByRole('button', { name: 'Suggest a starting recipe' }).waitFor();
+      else await form.getByRole('region', { name: 'Next pour' }).waitFor({ timeout: 20_000 });
       // The second pour starts from the first one's recipe, ready to adjust.
       if (i === 0) await form.getByRole('button', { name: 'Add a recipe line' }).click();
       else expect(await form.getByLabel('Line 1 colorant').inputValue()).toBe(pigment.id);
@@ -54,6 +57,19 @@ describe.runIf(browserAvailable())('browser: a whole match on the bench', () => 
       await page.getByRole('button', { name: 'Measure and save pour' }).click();
       await page.getByRole('heading', { name: `Pour #${i + 1} against the target` }).waitFor({ timeout: 20_000 });
     }
+    // The hint sits in the form of the next pour; "use these doses" fills the lines with it.
+    const latestId = (await page.request.get(`${baseUrl()}${new URL(page.url()).pathname.replace('/matches/', '/api/matches/')}`).then((r) => r.json())).pours.at(-1).id;
+    const advice = await page.request.get(`${baseUrl()}/api/pours/${latestId}/suggestion`).then((r) => r.json());
+    await page.getByRole('button', { name: 'New pour' }).click();
+    const next = page.getByRole('form', { name: 'New pour' });
+    await next.getByRole('region', { name: 'Next pour' }).waitFor({ timeout: 20_000 });
+    const change = advice.zones.flatMap((z: { zone: string; changes: { colorantId: string; to: number }[] }) => z.changes.map((c) => ({ zone: z.zone, ...c }))).find((c: { to: number }) => c.to > 0);
+    if (change) {
+      await next.getByRole('button', { name: 'Use these doses' }).click();
+      const amounts = await next.getByLabel(/Line \d+ amount/).evaluateAll((els) => els.map((e) => Number((e as HTMLInputElement).value)));
+      expect(amounts).toContain(change.to);
+    }
+    await page.getByRole('button', { name: 'Cancel' }).click();
     const figures = await page.getByRole('region', { name: 'Pour #2 against the target' }).textContent();
     expect(figures).toMatch(/ΔE00/);
     expect(figures).toMatch(/ΔL\*/);

@@ -1,3 +1,4 @@
+import { ColorantCalibration } from '@/components/library/colorant-calibration';
 import { ColorantLibrary } from '@/components/library/colorant-library';
 import { db } from '@/db';
 import { listColorants } from '@/db/queries/libraries';
@@ -20,6 +21,7 @@ export default async function ColorantsPage() {
           : 'Leads and the owner keep this library.'}
       </p>
       <ColorantLibrary initial={rows} canEdit={canEdit} />
+      <ColorantCalibration canCalibrate={roleAtLeast(member.role, 'maker')} />
     </section>
   );
 }

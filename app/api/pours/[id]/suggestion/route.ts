@@ -5,7 +5,7 @@ import { requireMember } from '@/lib/auth/current';
 import { json, notFound, withApi } from '@/lib/http/api';
 import { suggestNextPour } from '@/lib/matches/suggestNextPour';
 
-// The next adjustment for a pour, learnt from the team's own pour history.
+// The next pour's doses for a pour, from the shop's colorant model corrected by this match's pours.
 export const GET = withApi<{ id: string }>(async (_req, { params }) => {
   const member = await requireMember();
   const { id } = await params;

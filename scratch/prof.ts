@@ -1,0 +1,14 @@
+import { adviseZone, fitColorantModel, predictMixture, type DoseObservation } from '../lib/color';
+import { simHistory, trueLab, COLORANTS } from '../tests/color/sim/shop';
+const key = (i: number) => `c${i}:drops`;
+const toDoses = (v: number[]) => Object.fromEntries(v.flatMap((d, i) => (d > 0 ? [[key(i), d]] : [])));
+const obs: DoseObservation[] = simHistory(300, 1).map((d) => ({ doses: toDoses(d), lab: trueLab(d) }));
+const model = fitColorantModel(obs)!;
+let t = performance.now();
+for (let i = 0; i < 1000; i++) predictMixture(model, { 'c0:drops': 2, 'c1:drops': 3 });
+console.log('predict us', (performance.now() - t));
+const r = [1, 2, 0, 0, 1, 0];
+const target = trueLab([2, 2, 0, 0, 1, 0]);
+t = performance.now();
+for (let i = 0; i < 20; i++) adviseZone({ model, target, pours: [{ doses: toDoses(r), lab: trueLab(r) }], lines: r.flatMap((d, i) => (d > 0 ? [{ key: key(i), amount: d, step: 0.5 }] : [])), candidates: COLORANTS.flatMap((_, i) => (r[i]! > 0 ? [] : [{ key: key(i), step: 0.5, typical: 3 }])), tolerance: 2 });
+console.log('advise ms', (performance.now() - t) / 20);
