@@ -1,4 +1,4 @@
-import { trimmed } from '@/lib/format';
+import { formatDose } from '@/lib/format';
 import type { Sheet } from './sheet-tables';
 
 // The standard's recipe re-dosed for a mold of another thickness class: a prediction from the
@@ -16,8 +16,8 @@ export function ThicknessRedose({ redose }: { redose: NonNullable<Sheet['thickne
               <tr key={`${l.zone}-${l.colorantId}-${l.unit}`}>
                 <td className="capitalize">{l.zone}</td>
                 <td>{l.colorant}</td>
-                <td className="num text-right">{trimmed(l.amount)} {l.unit}</td>
-                <td className="num text-right font-semibold">{trimmed(l.redosed)} {l.unit}</td>
+                <td className="num text-right">{formatDose(l.amount, l.unit)}</td>
+                <td className="num text-right font-semibold">{formatDose(l.redosed, l.unit)}</td>
               </tr>
             ))}
           </tbody>
