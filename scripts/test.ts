@@ -3,7 +3,7 @@ import path from 'node:path';
 import { buildApp } from './build-app';
 import { run } from './run';
 
-// The whole suite: type check, a production build of the app for the
+// The whole suite: lint (ESLint, no warnings), type check, a production build of the app for the
 // integration and browser tests, then vitest (unit, integration, browser).
 const root = path.resolve(__dirname, '..');
 const bin = (name: string) => path.join(root, 'node_modules', '.bin', name);
@@ -18,6 +18,7 @@ async function main() {
       process.exit(code);
     }
   };
+  await step('lint', bin('eslint'), [root, '--max-warnings', '0']);
   await step('type check', bin('tsc'), ['--noEmit', '-p', root]);
   console.log('\n== build (for the integration and browser tests)');
   const built = await buildApp(root, process.env.POURPROOF_TEST_DIST ?? '.next-test');
