@@ -8,24 +8,39 @@ import {
   text,
   uniqueIndex,
 } from 'drizzle-orm/sqlite-core';
+import {
+  ROLES,
+  MATCH_STATUSES,
+  POUR_STATUSES,
+  COLORANT_KINDS,
+  DOSE_UNITS,
+  PHOTO_KINDS,
+  THICKNESS,
+  SAMPLE_PURPOSES,
+  STOCK_MOVEMENT_KINDS,
+} from '../lib/enums';
 
 // Every table of Pourproof. Times are unix milliseconds, except the session
 // expiry columns, kept in seconds as lucia's drizzle adapter expects.
 
-export const ROLES = ['owner', 'lead', 'maker', 'viewer'] as const;
-export type Role = (typeof ROLES)[number];
-export const MATCH_STATUSES = ['open', 'in_review', 'approved', 'archived'] as const;
-export type MatchStatus = (typeof MATCH_STATUSES)[number];
-export const POUR_STATUSES = ['measured', 'submitted', 'approved', 'rework', 'retired'] as const;
-export type PourStatus = (typeof POUR_STATUSES)[number];
-export const COLORANT_KINDS = ['base', 'pigment', 'pearl', 'flake', 'glow', 'additive'] as const;
-export type ColorantKind = (typeof COLORANT_KINDS)[number];
-export const DOSE_UNITS = ['drops', 'tsp', 'g', 'ml'] as const;
-export type DoseUnit = (typeof DOSE_UNITS)[number];
-export const PHOTO_KINDS = ['reference', 'pour', 'batch', 'swatch'] as const;
-export type PhotoKind = (typeof PHOTO_KINDS)[number];
-export const THICKNESS = ['thin', 'standard', 'thick'] as const;
-export const SAMPLE_PURPOSES = ['target', 'pour', 'batch', 'swatch'] as const;
+export {
+  ROLES,
+  MATCH_STATUSES,
+  POUR_STATUSES,
+  COLORANT_KINDS,
+  DOSE_UNITS,
+  PHOTO_KINDS,
+  THICKNESS,
+  SAMPLE_PURPOSES,
+  STOCK_MOVEMENT_KINDS,
+  type Role,
+  type MatchStatus,
+  type PourStatus,
+  type ColorantKind,
+  type DoseUnit,
+  type PhotoKind,
+  type StockMovementKind,
+} from '../lib/enums';
 
 const now = sql`(cast(unixepoch('subsec') * 1000 as integer))`;
 
@@ -352,8 +367,6 @@ export const signOffs = sqliteTable(
   (t) => [index('sign_offs_match_idx').on(t.matchId)],
 );
 
-export const STOCK_MOVEMENT_KINDS = ['batch', 'pour', 'adjustment', 'delivery'] as const;
-export type StockMovementKind = (typeof STOCK_MOVEMENT_KINDS)[number];
 
 // The ledger of stock: every draw (a batch, a test pour), delivery and manual
 // adjustment, signed, in the colorant's unit. colorants.stock is the running

@@ -6,7 +6,7 @@ import { HeatCaution } from '@/components/safety/heat-caution';
 import { AmountEcho } from '@/components/ui/amount-echo';
 import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
-import { DOSE_UNITS, type DoseUnit } from '@/db/schema';
+import { DOSE_UNITS, type DoseUnit } from '@/lib/enums';
 import { formatDose, formatMl, trimmed } from '@/lib/format';
 import { swrFetcher } from '@/lib/http/client';
 import { ML_PER_CUP, moldYield, parseAmount, scaleRecipe, toCups, VOLUME_LABEL, VOLUME_UNITS, type VolumeUnit } from '@/lib/recipes';

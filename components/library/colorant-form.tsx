@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button';
 import { Field, TextInput, inputClass } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
 import type { ColorantView } from '@/db/queries/libraries';
-import { COLORANT_KINDS, DOSE_UNITS } from '@/db/schema';
+import { COLORANT_KINDS, DOSE_UNITS } from '@/lib/enums';
 import { colorantFields, colorantSchema } from '@/lib/validations/library';
 import { KIND_OPTION, UNIT_LABEL, USUAL_UNIT, numberOrNull, perUnit } from './format';
 import { useEntrySubmit } from './use-entry-submit';

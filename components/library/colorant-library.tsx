@@ -1,7 +1,7 @@
 'use client';
 
 import type { ColorantView } from '@/db/queries/libraries';
-import { COLORANT_KINDS } from '@/db/schema';
+import { COLORANT_KINDS } from '@/lib/enums';
 import { ColorantForm } from './colorant-form';
 import { EditorPanel } from './editor-panel';
 import { KIND_LABEL, amountOf, costPer, inches, lab } from './format';

@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button';
 import { Field, TextInput, inputClass } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
 import type { MoldView } from '@/db/queries/libraries';
-import { THICKNESS } from '@/db/schema';
+import { THICKNESS } from '@/lib/enums';
 import { moldSchema } from '@/lib/validations/library';
 import { numberOrNull } from './format';
 import { useEntrySubmit } from './use-entry-submit';

@@ -15,7 +15,7 @@ import { useMemo, useState } from 'react';
 import { BandBadge } from '@/components/color/band-badge';
 import { inputClass } from '@/components/ui/field';
 import type { MatchView } from '@/db/queries/matches';
-import { MATCH_STATUSES } from '@/db/schema';
+import { MATCH_STATUSES } from '@/lib/enums';
 import { bandFor } from '@/lib/color/bandFor';
 import { formatDeltaE } from '@/lib/format';
 import { StatusBadge } from './status-badge';

@@ -4,7 +4,7 @@ import { type Control, type UseFormRegister, type UseFormSetValue, useFieldArray
 import { AmountEcho } from '@/components/ui/amount-echo';
 import { Button } from '@/components/ui/button';
 import { inputClass } from '@/components/ui/field';
-import { DOSE_UNITS, type DoseUnit } from '@/db/schema';
+import { DOSE_UNITS, type DoseUnit } from '@/lib/enums';
 import type { PourFormValues } from './pour-form';
 
 export type ColorantOption = { id: string; name: string; kind: string; unit: (typeof DOSE_UNITS)[number] };

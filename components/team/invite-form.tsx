@@ -8,7 +8,7 @@ import type { z } from 'zod';
 import { Button } from '@/components/ui/button';
 import { Field, TextInput, inputClass } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
-import { ROLES } from '@/db/schema';
+import { ROLES } from '@/lib/enums';
 import { apiFetch } from '@/lib/http/client';
 import { invitationSchema } from '@/lib/validations/auth';
 

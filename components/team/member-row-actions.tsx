@@ -2,7 +2,7 @@
 
 import { useActionState } from 'react';
 import type { TeamActionState } from '@/app/(bench)/team/actions';
-import { ROLES } from '@/db/schema';
+import { ROLES } from '@/lib/enums';
 
 type Action = (prev: TeamActionState, form: FormData) => Promise<TeamActionState>;
 

@@ -1,6 +1,6 @@
 import 'server-only';
 import { z } from 'zod';
-import { PHOTO_KINDS, type PhotoKind } from '@/db/schema';
+import { PHOTO_KINDS, type PhotoKind } from '@/lib/enums';
 import { badRequest } from '@/lib/http/api';
 import { formFile, readMultipart } from '@/lib/http/multipart';
 import { MAX_PHOTO_BYTES, TOO_LARGE_MESSAGE } from './limits';

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ROLES } from '@/db/schema';
+import { ROLES } from '@/lib/enums';
 
 export const emailField = z
   .string({ error: 'email is required' })

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { COLORANT_KINDS, DOSE_UNITS, THICKNESS } from '@/db/schema';
+import { COLORANT_KINDS, DOSE_UNITS, THICKNESS } from '@/lib/enums';
 
 // The colorant and mold libraries: one schema per entity serves the forms on
 // /colorants and /molds and the route handlers. Optional fields take null to

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DOSE_UNITS } from '@/db/schema';
+import { DOSE_UNITS } from '@/lib/enums';
 import { shapeSchema } from '@/lib/color/shapeSchema';
 import { parseAmount } from '@/lib/recipes/parseAmount';
 
