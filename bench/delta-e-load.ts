@@ -4,7 +4,7 @@ import os from 'node:os';
 import path from 'node:path';
 import autocannon from 'autocannon';
 import { openDatabase } from '../db/open';
-import { seedDemo } from '../db/seed-demo';
+import { seedDemo } from '../scripts/seed/seed-demo';
 import { healthUnderMeasure, type HealthUnderMeasure } from './health-under-measure';
 
 export type LoadResult = { health: HealthUnderMeasure; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };

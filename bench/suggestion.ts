@@ -3,7 +3,7 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { newId } from '../lib/auth/tokens';
+import { newId } from '../lib/ids';
 import { openDatabase } from '../db/open';
 import { colorants, matches, photos, pours, recipeLines, samples, teams, zones } from '../db/schema';
 import { fitColorantModel } from '../lib/color';

@@ -1,6 +1,6 @@
 import type { DB } from '@/db/open';
 import { auditEvents } from '@/db/schema';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 
 type Tx = Pick<DB, 'insert'>;
 

@@ -1,10 +1,10 @@
 import { spawn } from 'node:child_process';
 import path from 'node:path';
 import { openDatabase } from '../db/open';
-import { demoTeamId, seedDemo } from '../db/seed-demo';
-import { seedDemoPours } from '../db/seed-demo-pours';
+import { demoTeamId, seedDemo } from './seed/seed-demo';
+import { seedDemoPours } from './seed/seed-demo-pours';
 import { settleMail } from '../lib/mail/queue';
-import { seedDemoStandard } from '../db/seed-demo-standard';
+import { seedDemoStandard } from './seed/seed-demo-standard';
 import { buildApp } from './build-app';
 import { buildIsStale } from './build-stale';
 import { startStandIns } from './standins';

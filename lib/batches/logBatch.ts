@@ -4,7 +4,7 @@ import type { Member } from '@/db/queries/members';
 import { batches, matches, molds, pours, samples, teams } from '@/db/schema';
 import { compareLab } from '@/lib/color';
 import { recordAudit } from '@/lib/audit';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 import { ApiError } from '@/lib/http/api';
 import { queueMail } from '@/lib/mail/queue';
 import { batchFailedMail } from '@/lib/mail/templates-production';

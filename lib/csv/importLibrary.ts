@@ -5,7 +5,7 @@ import { findColorantByName, findMoldByName } from '@/db/queries/libraries';
 import type { Member } from '@/db/queries/members';
 import { colorants, molds } from '@/db/schema';
 import { recordAudit } from '@/lib/audit';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 import { colorantColumns } from '@/lib/libraries/colorants';
 import { moldColumns } from '@/lib/libraries/molds';
 import { moveStock } from '@/lib/stock/moveStock';

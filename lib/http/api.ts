@@ -19,10 +19,9 @@ export function errorResponse(status: number, code: string, message: string, hea
 }
 
 export const badRequest = (message: string, code = 'invalid_body') => new ApiError(400, code, message);
-export const notFound = (what = 'Not found') => new ApiError(404, 'not_found', what);
+// Named apart from next/navigation's notFound(), which renders a page's 404.
+export const notFoundError = (what = 'Not found') => new ApiError(404, 'not_found', what);
 export const forbidden = (message = 'Your role may not do this') => new ApiError(403, 'forbidden', message);
-export const conflict = (message: string, code = 'conflict') => new ApiError(409, code, message);
-export const unprocessable = (message: string, code = 'unprocessable') => new ApiError(422, code, message);
 
 type Ctx<P> = { params: Promise<P> };
 

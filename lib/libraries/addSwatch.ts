@@ -4,7 +4,7 @@ import type { Member } from '@/db/queries/members';
 import { getLiveColorant } from '@/db/queries/libraries';
 import { samples, swatches } from '@/db/schema';
 import { recordAudit } from '@/lib/audit';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 import { ApiError } from '@/lib/http/api';
 import { measureZones } from '@/lib/matches/measureZones';
 import type { SwatchInput } from '@/lib/validations/swatch';

@@ -4,8 +4,8 @@ import { colorantView, findColorantByName, getLiveColorant } from '@/db/queries/
 import type { Member } from '@/db/queries/members';
 import { type Colorant, colorants } from '@/db/schema';
 import { recordAudit } from '@/lib/audit';
-import { newId } from '@/lib/auth/tokens';
-import { badRequest, notFound } from '@/lib/http/api';
+import { newId } from '@/lib/ids';
+import { badRequest, notFoundError } from '@/lib/http/api';
 import { type ColorantInput, type ColorantPatch, FLAKE_SIZE_REQUIRED } from '@/lib/validations/library';
 import { moveStock } from '@/lib/stock/moveStock';
 import { assertNameFree, isUniqueViolation, nameTakenError } from './nameTaken';
@@ -67,7 +67,7 @@ export function updateColorant(database: DB, member: Member, id: string, patch: 
   try {
     return database.transaction((tx) => {
       const row = getLiveColorant(tx, teamId, id);
-      if (!row) throw notFound(NOT_IN_LIBRARY);
+      if (!row) throw notFoundError(NOT_IN_LIBRARY);
       const current = colorantView(row);
       const changes = Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)) as ColorantPatch;
       const merged: ColorantInput = { ...current, ...changes };
@@ -96,7 +96,7 @@ export function archiveColorant(database: DB, member: Member, id: string) {
   const teamId = member.team.id;
   database.transaction((tx) => {
     const row = getLiveColorant(tx, teamId, id);
-    if (!row) throw notFound(NOT_IN_LIBRARY);
+    if (!row) throw notFoundError(NOT_IN_LIBRARY);
     tx.update(colorants).set({ archivedAt: Date.now() }).where(eq(colorants.id, id)).run();
     recordAudit(tx, { teamId, actorId: member.user.id, action: 'colorant.archived', entity: 'colorant', entityId: id, data: { name: row.name } });
   });

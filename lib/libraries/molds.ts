@@ -4,8 +4,8 @@ import { findMoldByName, getLiveMold, moldView } from '@/db/queries/libraries';
 import type { Member } from '@/db/queries/members';
 import { molds } from '@/db/schema';
 import { recordAudit } from '@/lib/audit';
-import { newId } from '@/lib/auth/tokens';
-import { notFound } from '@/lib/http/api';
+import { newId } from '@/lib/ids';
+import { notFoundError } from '@/lib/http/api';
 import type { MoldInput, MoldPatch } from '@/lib/validations/library';
 import { assertNameFree, isUniqueViolation, nameTakenError } from './nameTaken';
 
@@ -41,7 +41,7 @@ export function updateMold(database: DB, member: Member, id: string, patch: Mold
   try {
     return database.transaction((tx) => {
       const row = getLiveMold(tx, teamId, id);
-      if (!row) throw notFound(NOT_IN_LIBRARY);
+      if (!row) throw notFoundError(NOT_IN_LIBRARY);
       const changes = Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)) as MoldPatch;
       if (changes.name !== undefined) assertNameFree('mold', changes.name, findMoldByName(tx, teamId, changes.name, id));
       tx.update(molds).set(moldColumns({ ...moldView(row), ...changes })).where(eq(molds.id, id)).run();
@@ -60,7 +60,7 @@ export function archiveMold(database: DB, member: Member, id: string) {
   const teamId = member.team.id;
   database.transaction((tx) => {
     const row = getLiveMold(tx, teamId, id);
-    if (!row) throw notFound(NOT_IN_LIBRARY);
+    if (!row) throw notFoundError(NOT_IN_LIBRARY);
     tx.update(molds).set({ archivedAt: Date.now() }).where(eq(molds.id, id)).run();
     recordAudit(tx, { teamId, actorId: member.user.id, action: 'mold.archived', entity: 'mold', entityId: id, data: { name: row.name } });
   });

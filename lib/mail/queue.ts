@@ -2,7 +2,7 @@ import 'server-only';
 import { and, eq, inArray, lte, or } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import { outgoingMail } from '@/db/schema';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 import { getTransport, mailFrom } from './transport';
 
 export type MailMessage = { teamId: string | null; to: string; subject: string; text: string; html?: string };

@@ -5,7 +5,7 @@ import { colorants, matches, molds, pours, recipeLines, samples, teams } from '@
 import { targetUncertainties } from '@/db/queries/pours';
 import { compareLab } from '@/lib/color';
 import { recordAudit } from '@/lib/audit';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 import { ApiError } from '@/lib/http/api';
 import type { PourInput } from '@/lib/validations/match';
 import { defaultBase } from '@/lib/batches/batchMaterials';

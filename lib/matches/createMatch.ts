@@ -3,7 +3,7 @@ import type { DB } from '@/db/open';
 import type { Member } from '@/db/queries/members';
 import { matches, teams, zones } from '@/db/schema';
 import { recordAudit } from '@/lib/audit';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 import type { CreateMatchInput } from '@/lib/validations/match';
 
 export function createMatch(database: DB, member: Member, input: CreateMatchInput): string {

@@ -4,7 +4,7 @@ import type { Member } from '@/db/queries/members';
 import { matches, samples, zones } from '@/db/schema';
 import { deltaE2000, type Lab } from '@/lib/color';
 import { recordAudit } from '@/lib/audit';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 import { ApiError } from '@/lib/http/api';
 import type { TargetInput } from '@/lib/validations/match';
 import { assertZonesOfMatch, loadMatch } from './loadMatch';

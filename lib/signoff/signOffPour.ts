@@ -4,7 +4,7 @@ import type { Member } from '@/db/queries/members';
 import { getPour } from '@/db/queries/pours';
 import { matches, pours, signOffs } from '@/db/schema';
 import { recordAudit } from '@/lib/audit';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 import { ApiError } from '@/lib/http/api';
 import { queueMail } from '@/lib/mail/queue';
 import { decisionMail } from '@/lib/mail/templates-production';

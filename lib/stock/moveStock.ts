@@ -1,7 +1,7 @@
 import { and, eq, isNotNull, sql } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import { colorants, stockMovements, type StockMovementKind } from '@/db/schema';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 
 type Tx = Pick<DB, 'insert' | 'update'>;
 

@@ -2,7 +2,7 @@ import type { DB } from '@/db/open';
 import { getLiveColorant } from '@/db/queries/libraries';
 import type { Member } from '@/db/queries/members';
 import { recordAudit } from '@/lib/audit';
-import { notFound } from '@/lib/http/api';
+import { notFoundError } from '@/lib/http/api';
 import type { StockMovementInput } from '@/lib/validations/stock';
 import { moveStock } from './moveStock';
 
@@ -11,7 +11,7 @@ export function recordMovement(database: DB, member: Member, colorantId: string,
   const teamId = member.team.id;
   return database.transaction((tx) => {
     const row = getLiveColorant(tx, teamId, colorantId);
-    if (!row) throw notFound('No such colorant in your library');
+    if (!row) throw notFoundError('No such colorant in your library');
     const balance = moveStock(tx, { teamId, colorantId, kind: input.kind, amount: input.amount, note: input.note, createdBy: member.user.id });
     recordAudit(tx, { teamId, actorId: member.user.id, action: `stock.${input.kind}`, entity: 'colorant', entityId: colorantId, data: { amount: input.amount, note: input.note } });
     return { colorantId, kind: input.kind, amount: input.amount, balance, note: input.note };

@@ -4,7 +4,7 @@ import type { Member } from '@/db/queries/members';
 import { memberships, teams, users } from '@/db/schema';
 import { recordAudit } from '@/lib/audit';
 import { hashPassword } from '@/lib/auth/password';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 import { ApiError } from '@/lib/http/api';
 import type { SignUpInput } from '@/lib/validations/auth';
 

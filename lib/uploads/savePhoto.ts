@@ -3,7 +3,7 @@ import type { DB } from '@/db/open';
 import { insertPhoto } from '@/db/queries/photos';
 import type { PhotoKind } from '@/db/schema';
 import { recordAudit } from '@/lib/audit';
-import { newId } from '@/lib/auth/tokens';
+import { newId } from '@/lib/ids';
 import { inspectPhoto, type InspectedPhoto } from './inspectPhoto';
 import type { UploadedPhoto } from './limits';
 import { deleteStored, fetchStoredBytes, storeBytes } from './service';

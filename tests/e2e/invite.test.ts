@@ -1,6 +1,6 @@
 import { describe, expect, inject, it } from 'vitest';
 import { artifactPath, browserAvailable, signedInPage, useBrowser } from '../support/browser';
-import { DEMO_TEAM } from '../../db/seed-demo';
+import { DEMO_TEAM } from '../../scripts/seed/seed-demo';
 import { api, baseUrl, signInAs, uniqueEmail } from '../support/http';
 
 type Stored = { to: string[]; subject: string; text: string; html: string | null };

@@ -3,10 +3,10 @@ import os from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { openDatabase } from '../../db/open';
-import { demoTeamId, seedDemo } from '../../db/seed-demo';
-import { seedDemoPours } from '../../db/seed-demo-pours';
+import { demoTeamId, seedDemo } from '../../scripts/seed/seed-demo';
+import { seedDemoPours } from '../../scripts/seed/seed-demo-pours';
 import { settleMail } from '../../lib/mail/queue';
-import { seedDemoStandard } from '../../db/seed-demo-standard';
+import { seedDemoStandard } from '../../scripts/seed/seed-demo-standard';
 import { startStandIns, type StandIns } from '../../scripts/standins';
 import { type AppProcess, freePort, isBuilt, startApp } from './app-process';
 

@@ -1,12 +1,12 @@
 import { db } from '@/db';
 import { getBatch } from '@/db/queries/batches';
 import { requireMember } from '@/lib/auth/current';
-import { json, notFound, withApi } from '@/lib/http/api';
+import { json, notFoundError, withApi } from '@/lib/http/api';
 
 export const GET = withApi<{ id: string }>(async (_req, { params }) => {
   const member = await requireMember();
   const { id } = await params;
   const batch = getBatch(db(), member.team.id, id);
-  if (!batch) throw notFound('No such batch in your team');
+  if (!batch) throw notFoundError('No such batch in your team');
   return json(batch);
 });

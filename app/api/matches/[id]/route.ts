@@ -1,7 +1,7 @@
 import { db } from '@/db';
 import { getMatchDetail } from '@/db/queries/matchDetail';
 import { requireMember, requireRole } from '@/lib/auth/current';
-import { json, notFound, readJson, withApi } from '@/lib/http/api';
+import { json, notFoundError, readJson, withApi } from '@/lib/http/api';
 import { assertSameOrigin } from '@/lib/http/origin';
 import { editMatch } from '@/lib/matches/editMatch';
 import { editMatchSchema } from '@/lib/validations/match';
@@ -10,7 +10,7 @@ export const GET = withApi<{ id: string }>(async (_req, { params }) => {
   const member = await requireMember();
   const { id } = await params;
   const match = getMatchDetail(db(), member.team.id, id);
-  if (!match) throw notFound('No such match in your team');
+  if (!match) throw notFoundError('No such match in your team');
   return json(match);
 });
 

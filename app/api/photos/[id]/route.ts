@@ -1,7 +1,7 @@
 import { db } from '@/db';
 import { getPhoto } from '@/db/queries/photos';
 import { requireMember } from '@/lib/auth/current';
-import { json, notFound, withApi } from '@/lib/http/api';
+import { json, notFoundError, withApi } from '@/lib/http/api';
 
 export const dynamic = 'force-dynamic';
 
@@ -9,6 +9,6 @@ export const GET = withApi<{ id: string }>(async (_req, { params }) => {
   const member = await requireMember();
   const { id } = await params;
   const photo = getPhoto(db(), member.team.id, id);
-  if (!photo) throw notFound('No such photo');
+  if (!photo) throw notFoundError('No such photo');
   return json(photo);
 });

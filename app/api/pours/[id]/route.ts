@@ -1,12 +1,12 @@
 import { db } from '@/db';
 import { getPour } from '@/db/queries/pours';
 import { requireMember } from '@/lib/auth/current';
-import { json, notFound, withApi } from '@/lib/http/api';
+import { json, notFoundError, withApi } from '@/lib/http/api';
 
 export const GET = withApi<{ id: string }>(async (_req, { params }) => {
   const member = await requireMember();
   const { id } = await params;
   const pour = getPour(db(), member.team.id, id);
-  if (!pour) throw notFound('No such pour in your team');
+  if (!pour) throw notFoundError('No such pour in your team');
   return json(pour);
 });

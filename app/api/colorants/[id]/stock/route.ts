@@ -1,7 +1,7 @@
 import { db } from '@/db';
 import { getStock, listMovements } from '@/db/queries/stock';
 import { requireMember, requireRole } from '@/lib/auth/current';
-import { json, notFound, readJson, withApi } from '@/lib/http/api';
+import { json, notFoundError, readJson, withApi } from '@/lib/http/api';
 import { assertSameOrigin } from '@/lib/http/origin';
 import { recordMovement } from '@/lib/stock/recordMovement';
 import { stockMovementSchema } from '@/lib/validations/stock';
@@ -11,7 +11,7 @@ export const GET = withApi<{ id: string }>(async (_req, { params }) => {
   const member = await requireMember();
   const { id } = await params;
   const c = getStock(db(), member.team.id, id);
-  if (!c) throw notFound('No such colorant in your library');
+  if (!c) throw notFoundError('No such colorant in your library');
   return json({ ...c, movements: listMovements(db(), member.team.id, id) });
 });
 

@@ -1,4 +1,4 @@
-import { archiveRoute } from '@/lib/matches/archiveRoute';
+import { archiveRoute } from '../_archive/archiveRoute';
 
 // Brings an archived match back (approved when it has a standard, else open).
 export const POST = archiveRoute(false);

@@ -1,7 +1,7 @@
 import { db } from '@/db';
 import { getPhotoFile } from '@/db/queries/photos';
 import { requireMember } from '@/lib/auth/current';
-import { notFound, withApi } from '@/lib/http/api';
+import { notFoundError, withApi } from '@/lib/http/api';
 import { fetchStored } from '@/lib/uploads/service';
 
 export const dynamic = 'force-dynamic';
@@ -12,7 +12,7 @@ export const GET = withApi<{ id: string }>(async (_req, { params }) => {
   const member = await requireMember();
   const { id } = await params;
   const file = getPhotoFile(db(), member.team.id, id);
-  if (!file) throw notFound('No such photo');
+  if (!file) throw notFoundError('No such photo');
   const stored = await fetchStored(file.fileKey);
   const ascii = file.fileName.replace(/[^\x20-\x7e]|["\\]/g, '_');
   return new Response(stored.body, {

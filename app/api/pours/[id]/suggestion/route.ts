@@ -2,7 +2,7 @@ import { and, eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { matches, pours } from '@/db/schema';
 import { requireMember } from '@/lib/auth/current';
-import { json, notFound, withApi } from '@/lib/http/api';
+import { json, notFoundError, withApi } from '@/lib/http/api';
 import { suggestNextPour } from '@/lib/matches/suggestNextPour';
 
 // The next pour's doses for a pour, from the shop's colorant model corrected by this match's pours.
@@ -15,6 +15,6 @@ export const GET = withApi<{ id: string }>(async (_req, { params }) => {
     .innerJoin(matches, eq(matches.id, pours.matchId))
     .where(and(eq(pours.id, id), eq(pours.teamId, member.team.id)))
     .get();
-  if (!row) throw notFound('No such pour in your team');
+  if (!row) throw notFoundError('No such pour in your team');
   return json(suggestNextPour(db(), member.team.id, id, row.tolerance));
 });

@@ -1,13 +1,13 @@
 import { and, eq } from 'drizzle-orm';
-import { getMemberByUserId } from './queries/members';
-import type { DB } from './open';
-import { colorants, matches, molds, pours, users } from './schema';
-import { logBatch } from '../lib/batches/logBatch';
-import { addPour } from '../lib/matches/addPour';
-import { setTarget } from '../lib/matches/setTarget';
-import { signOffPour } from '../lib/signoff/signOffPour';
-import { submitPour } from '../lib/signoff/submitPour';
-import { savePhotoBytes } from '../lib/uploads/savePhoto';
+import { getMemberByUserId } from '../../db/queries/members';
+import type { DB } from '../../db/open';
+import { colorants, matches, molds, pours, users } from '../../db/schema';
+import { logBatch } from '../../lib/batches/logBatch';
+import { addPour } from '../../lib/matches/addPour';
+import { setTarget } from '../../lib/matches/setTarget';
+import { signOffPour } from '../../lib/signoff/signOffPour';
+import { submitPour } from '../../lib/signoff/submitPour';
+import { savePhotoBytes } from '../../lib/uploads/savePhoto';
 import { baitPhoto, CARD, rgb8, ZONES } from './seed-demo-pours';
 
 // The demo's approved colour: "Pond ghost" poured twice, the second pour signed

@@ -1,9 +1,9 @@
 import { eq } from 'drizzle-orm';
-import { hashPassword } from '../lib/auth/password';
-import { newId } from '../lib/auth/tokens';
-import { moveStock } from '../lib/stock/moveStock';
-import type { DB } from './open';
-import { type Role, colorants, matches, memberships, molds, teams, users, zones } from './schema';
+import { hashPassword } from '../../lib/auth/password';
+import { newId } from '../../lib/ids';
+import { moveStock } from '../../lib/stock/moveStock';
+import type { DB } from '../../db/open';
+import { type Role, colorants, matches, memberships, molds, teams, users, zones } from '../../db/schema';
 
 // An invented shop with invented people, colours and recipes: nothing here
 // names a real brand, person or product.

@@ -1,12 +1,12 @@
 import { and, eq } from 'drizzle-orm';
 import sharp from 'sharp';
 import { converter } from 'culori';
-import { getMemberByUserId } from './queries/members';
-import type { DB } from './open';
-import { colorants, matches, molds, pours, users } from './schema';
-import { addPour } from '../lib/matches/addPour';
-import { setTarget } from '../lib/matches/setTarget';
-import { savePhotoBytes } from '../lib/uploads/savePhoto';
+import { getMemberByUserId } from '../../db/queries/members';
+import type { DB } from '../../db/open';
+import { colorants, matches, molds, pours, users } from '../../db/schema';
+import { addPour } from '../../lib/matches/addPour';
+import { setTarget } from '../../lib/matches/setTarget';
+import { savePhotoBytes } from '../../lib/uploads/savePhoto';
 
 // Demo photos of invented colours: a two-tone bait (back over belly) with
 // black flake in the back and a grey card beside it, generated here, stored
