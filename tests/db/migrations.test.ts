@@ -30,10 +30,13 @@ describe('migrations on a fresh SQLite file', () => {
     expect(() => sqlite.prepare("insert into pours (id, team_id, match_id, number) values ('p2', 't1', 'm1', 1)").run()).toThrow(/UNIQUE/);
   });
 
-  it('rejects a role outside the four', () => {
-    sqlite.prepare("insert into users (id, email, name, password_hash) values ('u1', 'a@b.test', 'A', 'x')").run();
-    // drizzle's text enum is checked in TypeScript, not by SQLite: the app's zod schemas guard it.
-    const roles = sqlite.prepare("select count(*) c from memberships").get() as { c: number };
-    expect(roles.c).toBe(0);
+  it('keeps roles to the four at the door: the invitation and role-change schemas refuse any other', async () => {
+    // SQLite does not check drizzle's text enum; every write of a role passes one of these schemas first.
+    const { changeRoleSchema, invitationSchema } = await import('../../lib/validations/auth');
+    for (const role of ['owner', 'lead', 'maker', 'viewer']) expect(changeRoleSchema.safeParse({ userId: 'u1', role }).success).toBe(true);
+    for (const role of ['admin', 'Owner', '', 'superuser']) {
+      expect(changeRoleSchema.safeParse({ userId: 'u1', role }).success, role).toBe(false);
+      expect(invitationSchema.safeParse({ email: 'a@b.test', role }).success, role).toBe(false);
+    }
   });
 });
