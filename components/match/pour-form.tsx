@@ -17,7 +17,7 @@ import type { Shape } from '@/lib/color/types';
 import { apiFetch, swrFetcher } from '@/lib/http/client';
 import type { UploadedPhoto } from '@/lib/uploads/limits';
 import { parseAmount } from '@/lib/recipes/parseAmount';
-import { recipeLineSchema } from '@/lib/validations/match';
+import { pourSchema, recipeLineSchema } from '@/lib/validations/match';
 import type { PourSuggestion } from '@/lib/matches/suggestionTypes';
 import { NextPourHint } from './next-pour-hint';
 import { CardCarriedNote } from './light-note';
@@ -37,9 +37,10 @@ const optionalAmount = (schema: z.ZodNumber) =>
 const formSchema = z.object({
   recipe: z.array(recipeLineSchema.and(z.object({ colorantId: z.string().min(1, 'choose a colorant') }))),
   moldId: z.string().optional(),
-  batchCups: optionalAmount(z.number().gt(0, 'batch size must be more than 0').max(400)),
-  tempF: optionalNumber(z.number().min(32, 'at least 32 °F').max(500, 'at most 500 °F')),
-  notes: z.string().max(4000).optional(),
+  // The limits are the pour route's own (lib/validations/match.ts).
+  batchCups: optionalAmount(pourSchema.shape.batchCups.unwrap().unwrap()),
+  tempF: optionalNumber(pourSchema.shape.tempF.unwrap().unwrap()),
+  notes: z.string().max(4000, 'notes must be at most 4000 characters').optional(),
   correctsPourId: z.string().optional(),
 });
 export type PourFormValues = z.input<typeof formSchema>;

@@ -77,8 +77,8 @@ export const pourSchema = z.object({
   photoId: idField,
   recipe: z.array(recipeLineSchema, { error: 'recipe must be a list' }).max(60, 'at most 60 recipe lines'),
   moldId: idField.optional().nullable(),
-  batchCups: z.number({ error: 'batchCups must be a number' }).gt(0, 'batchCups must be more than 0').max(400, 'batchCups must be at most 400').optional().nullable(),
-  tempF: z.number({ error: 'tempF must be a number' }).min(32, 'tempF must be at least 32 °F').max(500, 'tempF must be at most 500 °F').optional().nullable(),
+  batchCups: z.number({ error: 'the batch size must be a number of cups' }).gt(0, 'the batch size must be more than 0 cups').max(400, 'the batch size must be at most 400 cups').optional().nullable(),
+  tempF: z.number({ error: 'the temperature must be a number (°F)' }).min(32, 'the temperature must be at least 32 °F').max(500, 'the temperature must be at most 500 °F').optional().nullable(),
   notes: z.string().max(4000, 'notes must be at most 4000 characters').optional().nullable(),
   correctsPourId: idField.optional().nullable(),
   zones: z
