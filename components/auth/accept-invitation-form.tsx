@@ -1,12 +1,12 @@
 'use client';
 
 import { useActionState } from 'react';
-import type { AcceptState } from '@/app/(auth)/invite/[token]/actions';
+import type { ActionState } from '@/lib/http/action';
 import { Button } from '@/components/ui/button';
 import { Field, TextInput } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
 
-export function AcceptInvitationForm({ action }: { action: (prev: AcceptState, form: FormData) => Promise<AcceptState> }) {
+export function AcceptInvitationForm({ action }: { action: (prev: ActionState, form: FormData) => Promise<ActionState> }) {
   const [state, formAction, pending] = useActionState(action, null);
   return (
     <form action={formAction} className="space-y-4">

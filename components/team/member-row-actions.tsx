@@ -1,10 +1,10 @@
 'use client';
 
 import { useActionState } from 'react';
-import type { TeamActionState } from '@/app/(bench)/team/actions';
+import type { ActionState } from '@/lib/http/action';
 import { ROLES } from '@/lib/enums';
 
-type Action = (prev: TeamActionState, form: FormData) => Promise<TeamActionState>;
+type Action = (prev: ActionState, form: FormData) => Promise<ActionState>;
 
 export function MemberRowActions({ userId, role, name, changeRole, remove }: { userId: string; role: string; name: string; changeRole: Action; remove: Action }) {
   const [roleState, roleAction, rolePending] = useActionState(changeRole, null);

@@ -1,13 +1,22 @@
 import 'server-only';
 import { headers } from 'next/headers';
 import { unstable_rethrow } from 'next/navigation';
+import { z } from 'zod';
 import type { Member } from '@/db/queries/members';
 import type { Role } from '@/db/schema';
 import { requireRole } from '@/lib/auth/current';
 import { ApiError } from './api';
 import { assertSameOriginHeaders, clientIpFrom } from './origin';
 
+/** The one state every server action answers with (useActionState on the page). */
+export type ActionState = { ok: boolean; message?: string; fieldErrors?: Partial<Record<string, string[]>> } | null;
+
 export type ActionRefusal = { ok: false; message: string };
+
+/** A form that failed its zod schema, as the action's state: each field's messages. */
+export function invalidForm(error: z.ZodError): ActionState {
+  return { ok: false, fieldErrors: z.flattenError(error).fieldErrors as Partial<Record<string, string[]>> };
+}
 
 /**
  * The door of every server action, as `withApi` is of every route handler:

@@ -2,13 +2,11 @@
 
 import { revalidatePath } from 'next/cache';
 import { db } from '@/db';
-import { guardedAction } from '@/lib/http/action';
+import { type ActionState, guardedAction } from '@/lib/http/action';
 import { changeRole, removeMember } from '@/lib/team/members';
 import { changeRoleSchema } from '@/lib/validations/auth';
 
-export type TeamActionState = { ok: boolean; message?: string } | null;
-
-export async function changeRoleAction(_prev: TeamActionState, form: FormData): Promise<TeamActionState> {
+export async function changeRoleAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   return guardedAction('owner', async ({ member }) => {
     const parsed = changeRoleSchema.safeParse({ userId: form.get('userId'), role: form.get('role') });
     if (!parsed.success) return { ok: false, message: parsed.error.issues[0]?.message ?? 'Invalid role' };
@@ -18,7 +16,7 @@ export async function changeRoleAction(_prev: TeamActionState, form: FormData): 
   });
 }
 
-export async function removeMemberAction(_prev: TeamActionState, form: FormData): Promise<TeamActionState> {
+export async function removeMemberAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   return guardedAction('owner', async ({ member }) => {
     const userId = form.get('userId');
     if (typeof userId !== 'string' || !userId || userId.length > 64) return { ok: false, message: 'No member given' };

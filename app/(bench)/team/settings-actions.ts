@@ -5,20 +5,14 @@ import { revalidatePath } from 'next/cache';
 import { db } from '@/db';
 import { teams } from '@/db/schema';
 import { recordAudit } from '@/lib/audit';
-import { guardedAction } from '@/lib/http/action';
+import { type ActionState, guardedAction, invalidForm } from '@/lib/http/action';
 import { teamSettingsSchema } from '@/lib/validations/team';
 
-export type SettingsState = { ok: boolean; message?: string; fieldErrors?: Record<string, string> } | null;
-
-export async function saveTeamSettings(_prev: SettingsState, form: FormData): Promise<SettingsState> {
+export async function saveTeamSettings(_prev: ActionState, form: FormData): Promise<ActionState> {
   return guardedAction('owner', async ({ member }) => {
     const owner = member!;
     const parsed = teamSettingsSchema.safeParse(Object.fromEntries(form));
-    if (!parsed.success) {
-      const fieldErrors: Record<string, string> = {};
-      for (const i of parsed.error.issues) fieldErrors[String(i.path[0])] ??= i.message;
-      return { ok: false, fieldErrors };
-    }
+    if (!parsed.success) return invalidForm(parsed.error);
     db().transaction((tx) => {
       tx.update(teams).set(parsed.data).where(eq(teams.id, owner.team.id)).run();
       recordAudit(tx, { teamId: owner.team.id, actorId: owner.user.id, action: 'team.settings_changed', entity: 'team', entityId: owner.team.id, data: parsed.data });
