@@ -72,6 +72,7 @@ export const ROUTES: RouteEntry[] = [
   { method: 'POST', path: '/api/matches/:id/batches', role: 'maker', id: 'match', body: { photoId: 'matrix-photo', zones, cups: 1 } },
   { method: 'POST', path: '/api/matches/:id/archive', role: 'lead', id: 'match' },
   { method: 'POST', path: '/api/matches/:id/reopen', role: 'lead', id: 'match' },
+  { method: 'POST', path: '/api/matches/:id/starting-recipe', role: 'viewer', id: 'match', body: {} },
   { method: 'GET', path: '/api/pours/:id', role: 'viewer', id: 'pour' },
   { method: 'GET', path: '/api/pours/:id/suggestion', role: 'viewer', id: 'pour' },
   { method: 'POST', path: '/api/pours/:id/submit', role: 'maker', id: 'pour', body: {} },
