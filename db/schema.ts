@@ -23,24 +23,7 @@ import {
 // Every table of Pourproof. Times are unix milliseconds, except the session
 // expiry columns, kept in seconds as lucia's drizzle adapter expects.
 
-export {
-  ROLES,
-  MATCH_STATUSES,
-  POUR_STATUSES,
-  COLORANT_KINDS,
-  DOSE_UNITS,
-  PHOTO_KINDS,
-  THICKNESS,
-  SAMPLE_PURPOSES,
-  STOCK_MOVEMENT_KINDS,
-  type Role,
-  type MatchStatus,
-  type PourStatus,
-  type ColorantKind,
-  type DoseUnit,
-  type PhotoKind,
-  type StockMovementKind,
-} from '../lib/enums';
+export * from '../lib/enums';
 
 const now = sql`(cast(unixepoch('subsec') * 1000 as integer))`;
 

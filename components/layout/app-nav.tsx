@@ -92,22 +92,26 @@ export function AppNav({ member, devTools = false }: { member: Member; devTools?
               })}
             </ul>
             <div className="flex items-center justify-between gap-3 border-t border-panel-line pt-3 text-sm lg:hidden">
-              <span>
-                <span className="block font-medium">{member.name}</span>
-                <span className="block text-ink-soft">{member.team} · {member.role}</span>
-              </span>
+              <MemberName member={member} />
               {signOutButton}
             </div>
           </div>
         </nav>
         <div className="ml-auto hidden items-center gap-3 text-sm lg:flex">
-          <span className="text-right">
-            <span className="block font-medium">{member.name}</span>
-            <span className="block text-ink-soft">{member.team} · {member.role}</span>
-          </span>
+          <MemberName member={member} className="text-right" />
           {signOutButton}
         </div>
       </div>
     </header>
+  );
+}
+
+// Who is signed in, and as what: in the phone menu and beside the desktop navigation.
+function MemberName({ member, className }: { member: { name: string; role: string; team: string }; className?: string }) {
+  return (
+    <span className={className}>
+      <span className="block font-medium">{member.name}</span>
+      <span className="block text-ink-soft">{member.team} · {member.role}</span>
+    </span>
   );
 }
