@@ -75,9 +75,10 @@ describe.runIf(browserAvailable())('browser: sign-off, a production batch and it
     await signoff.getByLabel('Comment').fill('Good for the spring run');
     await signoff.getByRole('button', { name: 'Approve as standard' }).click();
     await signoff.getByText('this pour is the match’s standard').waitFor({ timeout: 15_000 });
-    const history = await signoff.getByRole('list', { name: 'Sign-off history' }).textContent();
-    expect(history).toMatch(/Pour #1 approved as standard by Lem Tashgar/);
-    expect(history).toContain('Good for the spring run');
+    // The history list refreshes on its own after the decision: wait for it.
+    const history = signoff.getByRole('list', { name: 'Sign-off history' });
+    await expect.poll(() => history.textContent(), { timeout: 15_000 }).toMatch(/Pour #1 approved as standard by Lem Tashgar/);
+    expect(await history.textContent()).toContain('Good for the spring run');
     await page.getByRole('button', { name: 'Approve as standard' }).waitFor({ state: 'detached' });
 
     // A batch of the same colours as the standard passes.
