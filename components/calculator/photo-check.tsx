@@ -1,6 +1,6 @@
 'use client';
 
-import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useCallback, useState } from 'react';
 import { PhotoSampler, NEUTRAL } from '@/components/sampler/photo-sampler';
 import { Button } from '@/components/ui/button';
 import { FormError } from '@/components/ui/form-error';
@@ -15,23 +15,13 @@ const ZONE = 'region';
 export function PhotoCheck() {
   const [file, setFile] = useState<File | null>(null);
   const [size, setSize] = useState<{ w: number; h: number } | null>(null);
+  const [url, setUrl] = useState<string | null>(null);
   const [shapes, setShapes] = useState<Record<string, Shape>>({});
   const [result, setResult] = useState<MeasureResult | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const onShapes = useCallback((s: Record<string, Shape>) => setShapes(s), []);
 
-  // The chosen file as a URL the sampler can show; let go of when the file changes.
-  const url = useMemo(() => (file ? URL.createObjectURL(file) : null), [file]);
-  useEffect(() => {
-    if (!url) return;
-    const u = url;
-    const img = new Image();
-    img.onload = () => setSize({ w: img.naturalWidth, h: img.naturalHeight });
-    img.onerror = () => setError('This file does not open as a picture here. Use a JPEG, PNG or WebP photo.');
-    img.src = u;
-    return () => URL.revokeObjectURL(u);
-  }, [url]);
 
   async function run() {
     if (!file || !shapes[ZONE]) return;
@@ -53,11 +43,21 @@ export function PhotoCheck() {
     }
   }
 
+  // The chosen file as a URL the sampler can show (the last one let go of),
+  // and its size once the browser has opened it.
   const choose = (f: File | null) => {
     setResult(null);
     setError(null);
     setSize(null);
     setFile(f);
+    if (url) URL.revokeObjectURL(url);
+    const next = f ? URL.createObjectURL(f) : null;
+    setUrl(next);
+    if (!next) return;
+    const img = new Image();
+    img.onload = () => setSize({ w: img.naturalWidth, h: img.naturalHeight });
+    img.onerror = () => setError('This file does not open as a picture here. Use a JPEG, PNG or WebP photo.');
+    img.src = next;
   };
 
   return (
