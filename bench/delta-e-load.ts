@@ -6,8 +6,9 @@ import autocannon from 'autocannon';
 import { openDatabase } from '../db/open';
 import { seedDemo } from '../scripts/seed/seed-demo';
 import { healthUnderMeasure, type HealthUnderMeasure } from './health-under-measure';
+import { type ReadLoad, runReadLoad } from './read-load';
 
-export type LoadResult = { health: HealthUnderMeasure; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
+export type LoadResult = { reads: ReadLoad; health: HealthUnderMeasure; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
 
 // POST /api/delta-e under load against `next start` (production build in
 // .next, built by the caller), 10 s with 32 connections, as a signed-in member.
@@ -43,9 +44,11 @@ export async function runDeltaELoad(root: string, port = 3199, seconds = 10): Pr
       headers: { 'content-type': 'application/json', origin: base, cookie },
       body: JSON.stringify({ reference: { l: 50, a: 2.6772, b: -79.7751 }, sample: { l: 50, a: 0, b: -82.7485 }, tolerance: 2 }),
     });
+    const reads = await runReadLoad(base, cookie);
     const refusals = await timeRefusals(base, cookie);
     const health = await healthUnderMeasure(base);
     return {
+      reads,
       health,
       refusals,
       rps: result.requests.average,

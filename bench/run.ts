@@ -32,6 +32,12 @@ async function main() {
   const l = await runDeltaELoad(root);
   console.log(`  ${l.rps.toFixed(0)} requests/s (${l.requests} in all, ${l.non2xx} non-2xx, ${l.errors} errors)`);
   console.log(`  latency p50 ${l.p50} ms · p97.5 ${l.p975} ms · p99 ${l.p99} ms`);
+  const r = l.reads;
+  console.log('\n== reads on the same server (autocannon, 8 s each; the demo shop)');
+  console.log(`  bare GET /api/health: ${r.healthRps.toFixed(0)} requests/s`);
+  console.log(`  POST /api/delta-e / bare health: ${(l.rps / r.healthRps).toFixed(2)} (goal ≥ 0.7)`);
+  console.log(`  GET /api/me (the session check alone) / bare health: ${r.meRps.toFixed(0)} / ${r.healthRps.toFixed(0)} = ${(r.meRps / r.healthRps).toFixed(2)} (goal ≥ 0.8)`);
+  console.log(`  GET /api/matches/:id at a steady 100 requests/s: p50 ${r.matchP50} ms, p99 ${r.matchP99} ms (goal p99 ≤ 50 ms; ${r.matchNon2xx} non-2xx)`);
   console.log('\n== /api/measure refusing bad photos (slowest of 3; target well under 2 s)');
   for (const r of l.refusals) console.log(`  ${r.label}: ${r.status} in ${r.ms.toFixed(0)} ms`);
   const h = l.health;
