@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { Figure } from '@/components/ui/figure';
 import { formatDose, formatMl, formatVolume } from '@/lib/format';
 import { encodeBatchPrefill, ML_PER_CUP, VOLUME_LABEL, type RunPlan, type VolumeUnit } from '@/lib/recipes';
 import type { PlannerStandard } from './run-planner';
@@ -61,14 +62,5 @@ export function PlanResult({ plan, std, unit, laminate, shelf }: { plan: RunPlan
       <PlanMaterials plan={plan} std={std} {...shelf} />
       <Link href={href} className="inline-flex min-h-tap items-center rounded-md bg-accent px-4 font-medium text-white">Log as batch</Link>
     </section>
-  );
-}
-
-function Figure({ label, children }: { label: string; children: React.ReactNode }) {
-  return (
-    <div>
-      <dt className="text-ink-soft">{label}</dt>
-      <dd className="font-medium">{children}</dd>
-    </div>
   );
 }

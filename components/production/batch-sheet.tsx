@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { Figure } from '@/components/ui/figure';
 import { SAFETY_CAUTIONS, TEMPERATURE_CAUTION } from '@/lib/batches/safetyCautions';
 import { formatDeltaE, formatLab, formatMl, formatTemp, formatVolume } from '@/lib/format';
 import { SheetCost, SheetPlan, SheetStock } from './sheet-production';
@@ -40,15 +41,15 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
           </div>
         </div>
         <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-4">
-          <Item label="Batch size"><span className="num">{formatVolume(sheet.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${formatMl(sheet.batchMl)})`}</span></Item>
-          <Item label="Standard">pour #{sheet.standard.number}</Item>
-          <Item label="Mold">{mold ? mold.name : 'not given'}</Item>
-          <Item label="Expected yield"><span className="num">{sheet.batch.baitsExpected ?? mold?.baits ?? '—'} baits</span></Item>
-          <Item label="Cost per bait"><span className="num">{sheet.cost.perBait === null ? '—' : `${sheet.cost.complete ? '' : '≥ '}${sheet.cost.currency} ${sheet.cost.perBait.toFixed(3)}`}</span></Item>
-          <Item label="Logged"><span className="num"><When at={sheet.batch.createdAt} dayOnly /></span></Item>
-          <Item label="QC against the standard"><PassBadge pass={sheet.batch.pass} /></Item>
-          <Item label="Tolerance"><span className="num">{formatDeltaE(sheet.match.tolerance)} ΔE00</span></Item>
-          <Item label="Baits counted"><span className="num">{sheet.batch.baits ?? '____'}</span></Item>
+          <Figure label="Batch size"><span className="num">{formatVolume(sheet.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${formatMl(sheet.batchMl)})`}</span></Figure>
+          <Figure label="Standard">pour #{sheet.standard.number}</Figure>
+          <Figure label="Mold">{mold ? mold.name : 'not given'}</Figure>
+          <Figure label="Expected yield"><span className="num">{sheet.batch.baitsExpected ?? mold?.baits ?? '—'} baits</span></Figure>
+          <Figure label="Cost per bait"><span className="num">{sheet.cost.perBait === null ? '—' : `${sheet.cost.complete ? '' : '≥ '}${sheet.cost.currency} ${sheet.cost.perBait.toFixed(3)}`}</span></Figure>
+          <Figure label="Logged"><span className="num"><When at={sheet.batch.createdAt} dayOnly /></span></Figure>
+          <Figure label="QC against the standard"><PassBadge pass={sheet.batch.pass} /></Figure>
+          <Figure label="Tolerance"><span className="num">{formatDeltaE(sheet.match.tolerance)} ΔE00</span></Figure>
+          <Figure label="Baits counted"><span className="num">{sheet.batch.baits ?? '____'}</span></Figure>
         </dl>
         <SheetQc sheet={sheet} />
       </header>
@@ -117,14 +118,5 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
         {sheet.batch.notes ? <p className="mt-2 text-sm"><span className="font-semibold">Batch notes:</span> {sheet.batch.notes}</p> : null}
       </section>
     </article>
-  );
-}
-
-function Item({ label, children }: { label: string; children: React.ReactNode }) {
-  return (
-    <div>
-      <dt className="text-ink-soft">{label}</dt>
-      <dd className="font-medium">{children}</dd>
-    </div>
   );
 }

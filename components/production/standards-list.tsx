@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { Figure } from '@/components/ui/figure';
 import { StatusBadge } from '@/components/match/status-badge';
 import type { StandardView as StandardRow } from '@/db/queries/standards';
 import type { BatchCost } from '@/lib/recipes';
@@ -104,13 +105,4 @@ export function StandardsList({ standards, canLog = false }: { standards: Standa
 function zonesOf(s: StandardView): string[] {
   const names = [...s.zones.map((z) => z.name), ...s.recipe.map((r) => r.zone)];
   return names.filter((z, i) => names.indexOf(z) === i && s.recipe.some((r) => r.zone === z));
-}
-
-function Figure({ label, children }: { label: string; children: React.ReactNode }) {
-  return (
-    <div>
-      <dt className="text-ink-soft">{label}</dt>
-      <dd className="font-medium">{children}</dd>
-    </div>
-  );
 }
