@@ -1,3 +1,4 @@
+import 'server-only';
 import { env } from '@/lib/env';
 import { openDatabase, type DB } from './open';
 

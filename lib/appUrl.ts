@@ -1,3 +1,4 @@
+import 'server-only';
 import { env } from '@/lib/env';
 
 // The app's public base URL for links in e-mail: APP_URL when set, else the

@@ -1,3 +1,4 @@
+import 'server-only';
 import type { DB } from '@/db/open';
 import { auditEvents } from '@/db/schema';
 import { newId } from '@/lib/ids';

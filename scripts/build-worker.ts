@@ -15,6 +15,8 @@ export async function buildMeasureWorker(distDir = process.env.NEXT_DIST_DIR || 
     format: 'esm',
     target: 'node20',
     external: ['sharp'],
+    // 'server-only' resolves to its empty module under the react-server condition.
+    conditions: ['react-server'],
     tsconfig: path.join(root, 'tsconfig.json'),
     // CommonJS dependencies inside an ES module bundle still call require().
     banner: { js: "import { createRequire as __pourproofRequire } from 'node:module'; const require = __pourproofRequire(import.meta.url);" },

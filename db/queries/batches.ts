@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import { describeDifference, labToHex } from '../../lib/color';
 import { costOfBatch, defaultBase, getBase } from '../../lib/batches/batchMaterials';

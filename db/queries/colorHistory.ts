@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, asc, eq, gte, inArray, lte, sql } from 'drizzle-orm';
 import type { DoseObservation } from '../../lib/color/types';
 import { doseKey, MODELLED_KINDS } from '../../lib/matches/doseModel';

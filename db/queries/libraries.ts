@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, asc, eq, isNull, ne, sql } from 'drizzle-orm';
 import type { DB } from '../open';
 import { type Colorant, type Mold, colorants, molds } from '../schema';

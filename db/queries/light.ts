@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, desc, eq, isNotNull } from 'drizzle-orm';
 import type { Shape } from '../../lib/color/types';
 import type { DB } from '../open';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, eq, inArray } from 'drizzle-orm';
 import type { DB } from '../open';
 import { outgoingMail } from '../schema';

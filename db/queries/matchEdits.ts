@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, desc, eq } from 'drizzle-orm';
 import type { DB } from '../open';
 import { auditEvents, users } from '../schema';

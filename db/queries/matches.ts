@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import { labToHex } from '../../lib/color';
 import type { DB } from '../open';

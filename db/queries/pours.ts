@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, asc, eq } from 'drizzle-orm';
 import { bandFor, describeDifference, labToHex } from '../../lib/color';
 import type { DB } from '../open';

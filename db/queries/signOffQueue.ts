@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, asc, eq } from 'drizzle-orm';
 import type { DB } from '../open';
 import { matches, pours, users } from '../schema';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, asc, desc, eq, inArray, isNotNull, ne } from 'drizzle-orm';
 import type { DB } from '../open';
 import { batches, colorants, matches, pours, recipeLines, samples, signOffs, users, zones } from '../schema';

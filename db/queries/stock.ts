@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, desc, eq, inArray, sql } from 'drizzle-orm';
 import type { DB } from '../open';
 import { colorants, stockMovements, users } from '../schema';

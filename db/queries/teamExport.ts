@@ -1,3 +1,4 @@
+import 'server-only';
 import { eq, getTableColumns, getTableName, inArray, type Table } from 'drizzle-orm';
 import type { SQLiteColumn } from 'drizzle-orm/sqlite-core';
 import type { DB } from '../open';

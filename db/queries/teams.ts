@@ -1,3 +1,4 @@
+import 'server-only';
 import { eq } from 'drizzle-orm';
 import type { DB } from '../open';
 import { teams } from '../schema';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { DrizzleSQLiteAdapter } from '@lucia-auth/adapter-drizzle';
 import { Lucia, TimeSpan } from 'lucia';
 import type { DB } from '@/db/open';

@@ -1,3 +1,4 @@
+import 'server-only';
 import type { Role } from '@/db/schema';
 
 const RANK: Record<Role, number> = { viewer: 0, maker: 1, lead: 2, owner: 3 };

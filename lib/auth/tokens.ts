@@ -1,3 +1,4 @@
+import 'server-only';
 import { createHash, randomBytes } from 'node:crypto';
 
 // 160 bits of randomness as 40 hex digits: the token of a session cookie or an invitation link.

@@ -1,3 +1,4 @@
+import 'server-only';
 import fs from 'node:fs';
 import path from 'node:path';
 import { BACKUP_DB_NAME, type BackupManifest, integrityOf, MANIFEST_NAME } from './backupDatabase';

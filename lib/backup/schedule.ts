@@ -1,3 +1,4 @@
+import 'server-only';
 import fs from 'node:fs';
 import { backupDatabase, listBackups } from './backupDatabase';
 import { backupSettings } from './settings';

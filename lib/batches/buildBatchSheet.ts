@@ -1,3 +1,4 @@
+import 'server-only';
 import type { DoseUnit } from '@/db/schema';
 import { ML_PER_CUP, moldYield, planRun, scaleRecipe, splitZoneCups, type ScaledLine, type VolumeUnit } from '@/lib/recipes';
 import { BATCH_SHEET_CAUTIONS, temperatureNote } from './safetyCautions';

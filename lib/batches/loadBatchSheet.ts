@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, asc, eq, inArray, isNull, or } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { BatchView } from '@/db/queries/batches';

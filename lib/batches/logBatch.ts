@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, eq, isNull } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { Member } from '@/db/queries/members';

@@ -1,3 +1,4 @@
+import 'server-only';
 import sharp, { type OutputInfo } from 'sharp';
 import { type PixelBox, type PixelWindow, parseIccProfile, type RgbProfile, SRGB8_TO_LINEAR, SRGB_TO_XYZ } from '@/lib/color';
 import { ImageError } from './imageError';

@@ -1,3 +1,4 @@
+import 'server-only';
 export type ImageErrorKind =
   | 'too_large' // file over MAX_IMAGE_BYTES → 413
   | 'too_many_pixels' // header says more than MAX_IMAGE_PIXELS → 413

@@ -1,3 +1,4 @@
+import 'server-only';
 // Server-side photo pipeline (sharp). Free of React and Next so tests and scripts can import it.
 export { decodeImage, type DecodedImage, type DecodeOptions } from './decodeImage';
 export { IMAGE_ERROR_STATUS, ImageError, type ImageErrorKind } from './imageError';

@@ -1,3 +1,4 @@
+import 'server-only';
 import sharp, { type Metadata } from 'sharp';
 import { ImageError } from './imageError';
 

@@ -1,3 +1,4 @@
+import 'server-only';
 import type { Shape } from '@/lib/color';
 import { ImageError } from './imageError';
 

@@ -1,3 +1,4 @@
+import 'server-only';
 import { ApiError } from '@/lib/http/api';
 
 type Found = { name: string; archivedAt: number | null } | undefined;

@@ -1,3 +1,4 @@
+import 'server-only';
 import { getDb as db } from '@/db/client';
 import { env } from '@/lib/env';
 import { deliverDue } from './queue';

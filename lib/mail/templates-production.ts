@@ -1,3 +1,4 @@
+import 'server-only';
 // The sign-off and production messages: sign-off requested (to leads and
 // owners), decision (to the maker), batch failed QC (to leads and owners).
 // Every message has a plain-text part; the html part says the same, simply.

@@ -1,3 +1,4 @@
+import 'server-only';
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 
 export function invitationMail(p: { teamName: string; inviterName: string; role: string; link: string }) {

@@ -1,3 +1,4 @@
+import 'server-only';
 // Shared by the server and the pour form (no database code here).
 import type { ColorantKind, DoseUnit } from '@/db/schema';
 

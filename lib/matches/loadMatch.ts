@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, asc, eq } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import { matches, zones } from '@/db/schema';

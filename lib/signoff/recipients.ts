@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, eq, inArray } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import { memberships, pours, recipeLines, users } from '@/db/schema';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, eq, isNotNull, sql } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import { colorants, stockMovements, type StockMovementKind } from '@/db/schema';

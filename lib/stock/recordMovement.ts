@@ -1,3 +1,4 @@
+import 'server-only';
 import type { DB } from '@/db/open';
 import { getLiveColorant } from '@/db/queries/libraries';
 import type { Member } from '@/db/queries/members';

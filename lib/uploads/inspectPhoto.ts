@@ -1,3 +1,4 @@
+import 'server-only';
 import sharp from 'sharp';
 import { ApiError } from '@/lib/http/api';
 import { heifKind, ImageError, type ImageHeader, inspectImage } from '@/lib/image';
