@@ -4,7 +4,6 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useCallback, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import useSWR from 'swr';
-import { z } from 'zod';
 import { HeatCaution } from '@/components/safety/heat-caution';
 import { NEUTRAL, PhotoSampler } from '@/components/sampler/photo-sampler';
 import { Button } from '@/components/ui/button';
@@ -16,34 +15,12 @@ import type { PourView } from '@/db/queries/pours';
 import type { Shape } from '@/lib/color/types';
 import { apiFetch, swrFetcher } from '@/lib/http/client';
 import type { UploadedPhoto } from '@/lib/uploads/limits';
-import { parseAmount } from '@/lib/recipes/parseAmount';
-import { pourSchema, recipeLineSchema } from '@/lib/validations/match';
 import type { PourSuggestion } from '@/lib/matches/suggestionTypes';
 import { NextPourHint } from './next-pour-hint';
 import { CardCarriedNote } from './light-note';
+import { formSchema, type PourFormValues } from './pour-form-schema';
 import { type ColorantOption, RecipeLines } from './recipe-lines';
 import { StartingRecipeButton } from './starting-recipe-button';
-
-const optionalNumber = (schema: z.ZodNumber) => z.preprocess((v) => (v === '' || Number.isNaN(v) ? undefined : v), schema.optional());
-// Batch size as a maker says it ("1 1/2", "¾"), through the one dose parser.
-const optionalAmount = (schema: z.ZodNumber) =>
-  z.preprocess((v, ctx) => {
-    if (v === '' || v === undefined || v === null || Number.isNaN(v)) return undefined;
-    const r = parseAmount(v as string | number);
-    if (r.ok) return r.value;
-    ctx.addIssue({ code: 'custom', message: r.message });
-    return z.NEVER;
-  }, schema.optional());
-const formSchema = z.object({
-  recipe: z.array(recipeLineSchema.and(z.object({ colorantId: z.string().min(1, 'choose a colorant') }))),
-  moldId: z.string().optional(),
-  // The limits are the pour route's own (lib/validations/match.ts).
-  batchCups: optionalAmount(pourSchema.shape.batchCups.unwrap().unwrap()),
-  tempF: optionalNumber(pourSchema.shape.tempF.unwrap().unwrap()),
-  notes: z.string().max(4000, 'notes must be at most 4000 characters').optional(),
-  correctsPourId: z.string().optional(),
-});
-export type PourFormValues = z.input<typeof formSchema>;
 
 type Props = { match: MatchDetail; initialShapes: Record<string, Shape>; previous?: PourView; onSaved: (pourId: string) => void };
 

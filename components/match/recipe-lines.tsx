@@ -5,7 +5,7 @@ import { AmountEcho } from '@/components/ui/amount-echo';
 import { Button } from '@/components/ui/button';
 import { inputClass } from '@/components/ui/field';
 import { DOSE_UNITS, type DoseUnit } from '@/lib/enums';
-import type { PourFormValues } from './pour-form';
+import type { PourFormValues } from './pour-form-schema';
 
 export type ColorantOption = { id: string; name: string; kind: string; unit: (typeof DOSE_UNITS)[number] };
 

@@ -1,7 +1,7 @@
 import { price } from '@/components/production/sheet-production';
 import { trimmed, unitLabel } from '@/lib/format';
 import { batchCost, batchDraws, type DrawColorant, type RunPlan } from '@/lib/recipes';
-import type { PlannerStandard } from './run-planner';
+import type { PlannerStandard } from './types';
 
 export type PlannerColorant = DrawColorant & { stock: number | null };
 

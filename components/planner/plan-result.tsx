@@ -2,7 +2,7 @@ import Link from 'next/link';
 import { Figure } from '@/components/ui/figure';
 import { formatDose, formatMl, formatVolume } from '@/lib/format';
 import { encodeBatchPrefill, ML_PER_CUP, VOLUME_LABEL, type RunPlan, type VolumeUnit } from '@/lib/recipes';
-import type { PlannerStandard } from './run-planner';
+import type { PlannerStandard } from './types';
 import { PlanMaterials, type PlannerColorant } from './plan-materials';
 
 export type Shelf = { colorants: PlannerColorant[]; baseId: string | null; currency: string; dropsPerMl: number; sprueAllowanceMl: number };

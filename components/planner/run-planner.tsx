@@ -3,13 +3,9 @@
 import { useState } from 'react';
 import { HeatCaution } from '@/components/safety/heat-caution';
 import { Field, inputClass } from '@/components/ui/field';
-import type { DoseUnit } from '@/db/schema';
 import { ML_PER_CUP, planRun, toCups, VOLUME_LABEL, type RunPlan, type VolumeUnit } from '@/lib/recipes';
 import { PlanResult, type Shelf } from './plan-result';
-
-export type PlannerStandard = { matchId: string; name: string; moldId: string | null; zones: { name: string }[]; recipe: { zone: string; colorantId: string; colorant: string; amount: number; unit: DoseUnit }[] };
-export type PlannerMold = { id: string; name: string; cavities: number; mlPerCavity: number };
-export type PlannerSettings = { volumeUnit: VolumeUnit; dropsPerMl: number; sprueAllowanceMl: number; currency: string };
+import type { PlannerMold, PlannerSettings, PlannerStandard } from './types';
 
 type Row = { on: boolean; shots: string };
 
