@@ -34,6 +34,12 @@ export const idField = z.string({ error: 'must be an id' }).min(1, 'must be an i
 export const zoneRegionSchema = z.object({ name: zoneName, shape: shapeSchema });
 /** A zone of a pour or batch may also mark the same zone of a physical reference in the same photo. */
 export const comparedZoneSchema = zoneRegionSchema.extend({ reference: shapeSchema.optional() });
+// The zones marked on a pour's or a batch's photo, each at most once.
+export const comparedZonesSchema = z
+  .array(comparedZoneSchema, { error: 'zones must be a list of { name, shape, reference? }' })
+  .min(1, 'mark at least one zone')
+  .max(16, 'at most 16 zones')
+  .refine((zs) => new Set(zs.map((z) => z.name)).size === zs.length, 'each zone may be marked once');
 
 export const neutralSchema = z.object({
   shape: shapeSchema,
@@ -81,11 +87,7 @@ export const pourSchema = z.object({
   tempF: z.number({ error: 'the temperature must be a number (°F)' }).min(32, 'the temperature must be at least 32 °F').max(500, 'the temperature must be at most 500 °F').optional().nullable(),
   notes: z.string().max(4000, 'notes must be at most 4000 characters').optional().nullable(),
   correctsPourId: idField.optional().nullable(),
-  zones: z
-    .array(comparedZoneSchema, { error: 'zones must be a list of { name, shape, reference? }' })
-    .min(1, 'mark at least one zone')
-    .max(16, 'at most 16 zones')
-    .refine((zs) => new Set(zs.map((z) => z.name)).size === zs.length, 'each zone may be marked once'),
+  zones: comparedZonesSchema,
   neutral: neutralSchema.optional(),
 });
 

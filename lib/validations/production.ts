@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { comparedZoneSchema, idField, neutralSchema, zoneName } from './match';
+import { comparedZonesSchema, idField, neutralSchema, zoneName } from './match';
 
 // Sign-off and production batches (issue #6). The ceilings are sanity limits
 // against typing slips, not shop limits: 400 cups is 25 gallons of plastisol.
@@ -65,11 +65,7 @@ export const planSchema = z
 export const batchSchema = z.object(
   {
     photoId: idField,
-    zones: z
-      .array(comparedZoneSchema, { error: 'zones must be a list of { name, shape, reference? }' })
-      .min(1, 'mark at least one zone')
-      .max(16, 'at most 16 zones')
-      .refine((zs) => new Set(zs.map((z) => z.name)).size === zs.length, 'each zone may be marked once'),
+    zones: comparedZonesSchema,
     neutral: neutralSchema.optional(),
     cups: z
       .number({ error: 'cups must be a number' })
