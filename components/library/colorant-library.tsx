@@ -5,7 +5,7 @@ import { COLORANT_KINDS } from '@/lib/enums';
 import { ColorantForm } from './colorant-form';
 import { EditorPanel } from './editor-panel';
 import { KIND_LABEL, amountOf, costPer, inches, lab } from './format';
-import { LibraryTable, RowName } from './library-table';
+import { Cell, LibraryTable, RowName } from './library-table';
 import { RefreshError, RowActions, useLibrary } from './use-library';
 import { LowMark, StockPanel } from './stock-panel';
 import { CsvDownload, CsvImport } from './csv-tools';
@@ -48,22 +48,22 @@ export function ColorantLibrary({ initial, canEdit }: { initial: ColorantView[];
       <RefreshError error={lib.error} />
       <LibraryTable headers={HEADERS} numeric={NUMERIC} caption="Colorant library" empty={rows.length === 0 ? (canEdit ? 'The library is empty. Add the plastisol base first, then the pigments, pearls and flakes your recipes use.' : 'The library is empty; a lead or the owner adds colorants.') : null}>
         {rows.map((c) => (
-          <tr key={c.id} className="border-t border-panel-line align-top">
+          <tr role="row" key={c.id} className="border-t border-panel-line align-top">
             <RowName name={c.name} sub={c.stock === null ? undefined : `${amountOf(c.stock, c.unit)} on the shelf${isLow(c) ? ' · ▼ low' : ''}`}>
               {canEdit ? <RowActions path={`${KEY}/${c.id}`} name={c.name} what="colorant" onEdit={() => editor.edit(c.id)} onArchived={refresh} /> : null}
               <Button type="button" variant="secondary" onClick={() => setStockFor(c.id)} aria-label={`Stock of ${c.name}`}>Stock</Button>
             </RowName>
-            <td className="p-3">
+            <Cell label={HEADERS[1]!}>
               {KIND_LABEL[c.kind]}
               <span className="block text-ink-soft">dosed in {c.unit === 'ml' ? 'mL' : c.unit}</span>
-            </td>
-            <td className="p-3 text-right whitespace-nowrap">{c.flakeSizeIn === null ? '—' : `${inches(c.flakeSizeIn)}${c.flakeColor ? `, ${c.flakeColor}` : ''}`}</td>
-            <td className="p-3 text-right whitespace-nowrap">{c.costPerUnit === null ? '—' : costPer(c.costPerUnit, c.unit)}</td>
-            <td className="p-3 text-right whitespace-nowrap">
+            </Cell>
+            <Cell label={HEADERS[2]!} numeric>{c.flakeSizeIn === null ? '—' : `${inches(c.flakeSizeIn)}${c.flakeColor ? `, ${c.flakeColor}` : ''}`}</Cell>
+            <Cell label={HEADERS[3]!} numeric>{c.costPerUnit === null ? '—' : costPer(c.costPerUnit, c.unit)}</Cell>
+            <Cell label={HEADERS[4]!} numeric>
               {c.stock === null ? '—' : amountOf(c.stock, c.unit)}
               {isLow(c) ? <span className="block"><LowMark /></span> : null}
-            </td>
-            <td className="p-3 whitespace-pre">{c.swatch ? lab(c.swatch) : '—'}</td>
+            </Cell>
+            <Cell label={HEADERS[5]!} className="whitespace-pre">{c.swatch ? lab(c.swatch) : '—'}</Cell>
           </tr>
         ))}
       </LibraryTable>

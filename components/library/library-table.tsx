@@ -5,18 +5,20 @@ import type { ReactNode } from 'react';
 const STICKY = 'sticky left-0 z-10 shadow-[inset_-1px_0_0_#d6cfc4]';
 
 // The library's table: the name column first and pinned, so each row's Edit
-// and Archive stay in reach and the row stays named while scrolling.
+// and Archive stay in reach and the row stays named while scrolling. On a phone
+// each row is a card (app/globals.css): every cell carries its column's name in
+// data-label, through Cell; the explicit roles keep it a table to a screen
+// reader when CSS changes its display.
 export function LibraryTable({ headers, numeric, caption, empty, children }: { headers: string[]; numeric: Set<string>; caption: string; empty: string | null; children: ReactNode }) {
   return (
     <div>
-      {empty ? null : <p className="mb-1 text-sm text-ink-soft sm:hidden">Swipe the table sideways for every column.</p>}
       <div className="overflow-x-auto rounded-lg border border-panel-line bg-white">
-        <table className="w-full text-left text-sm">
+        <table role="table" className="cards-on-phone w-full text-left text-sm">
           <caption className="sr-only">{caption}</caption>
           <thead className="bg-panel-deep">
-            <tr>
+            <tr role="row">
               {headers.map((h, i) => (
-                <th key={h} scope="col" className={`p-3 align-bottom ${numeric.has(h) ? 'text-right' : ''} ${i === 0 ? `${STICKY} bg-panel-deep` : ''}`}>{h}</th>
+                <th key={h} scope="col" role="columnheader" className={`p-3 align-bottom ${numeric.has(h) ? 'text-right' : ''} ${i === 0 ? `${STICKY} bg-panel-deep` : ''}`}>{h}</th>
               ))}
             </tr>
           </thead>
@@ -30,10 +32,18 @@ export function LibraryTable({ headers, numeric, caption, empty, children }: { h
 
 export function RowName({ name, sub, children }: { name: string; sub?: string; children?: ReactNode }) {
   return (
-    <th scope="row" className={`${STICKY} w-44 min-w-44 bg-white p-3 font-medium`}>
+    <th scope="row" role="rowheader" className={`${STICKY} w-44 min-w-44 bg-white p-3 font-medium`}>
       <span className="block break-words">{name}</span>
       {sub ? <span className="block text-sm font-normal text-ink-soft">{sub}</span> : null}
       {children ? <div className="mt-2 flex flex-wrap items-start gap-2 font-normal">{children}</div> : null}
     </th>
+  );
+}
+
+export function Cell({ label, numeric, className = '', children }: { label: string; numeric?: boolean; className?: string; children: ReactNode }) {
+  return (
+    <td role="cell" data-label={label} className={`p-3 ${numeric ? 'text-right whitespace-nowrap' : ''} ${className}`}>
+      <div>{children}</div>
+    </td>
   );
 }

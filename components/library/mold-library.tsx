@@ -3,7 +3,7 @@
 import type { MoldView } from '@/db/queries/libraries';
 import { EditorPanel } from './editor-panel';
 import { inches, millilitres } from './format';
-import { LibraryTable, RowName } from './library-table';
+import { Cell, LibraryTable, RowName } from './library-table';
 import { RefreshError, RowActions, useLibrary } from './use-library';
 import { MoldForm } from './mold-form';
 import { CsvDownload, CsvImport } from './csv-tools';
@@ -35,15 +35,15 @@ export function MoldLibrary({ initial, canEdit }: { initial: MoldView[]; canEdit
       <RefreshError error={error} />
       <LibraryTable headers={HEADERS} numeric={NUMERIC} caption="Mold library" empty={rows.length === 0 ? (canEdit ? 'No molds yet. Add the molds you pour with; yields and batch sheets work from them.' : 'No molds yet; a lead or the owner adds them.') : null}>
         {rows.map((m) => (
-          <tr key={m.id} className="border-t border-panel-line align-top">
+          <tr role="row" key={m.id} className="border-t border-panel-line align-top">
             <RowName name={m.name}>
               {canEdit ? <RowActions path={`${KEY}/${m.id}`} name={m.name} what="mold" onEdit={() => editor.edit(m.id)} onArchived={refresh} /> : null}
             </RowName>
-            <td className="p-3">{m.bodyStyle}</td>
-            <td className="p-3 text-right whitespace-nowrap">{m.lengthIn === null ? '—' : inches(m.lengthIn)}</td>
-            <td className="p-3 text-right">{m.cavities}</td>
-            <td className="p-3 text-right whitespace-nowrap">{millilitres(m.mlPerCavity)}</td>
-            <td className="p-3">{m.thickness}</td>
+            <Cell label={HEADERS[1]!}>{m.bodyStyle}</Cell>
+            <Cell label={HEADERS[2]!} numeric>{m.lengthIn === null ? '—' : inches(m.lengthIn)}</Cell>
+            <Cell label={HEADERS[3]!} numeric>{m.cavities}</Cell>
+            <Cell label={HEADERS[4]!} numeric>{millilitres(m.mlPerCavity)}</Cell>
+            <Cell label={HEADERS[5]!}>{m.thickness}</Cell>
           </tr>
         ))}
       </LibraryTable>

@@ -47,6 +47,12 @@ describe.runIf(browserAvailable())('browser: a new shop fills its colorant and m
     await page.screenshot({ path: artifactPath('library-colorants-390.png'), fullPage: true });
     const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
     expect(overflow, 'the page itself does not scroll sideways at 390 px').toBeLessThanOrEqual(0);
+    // On a phone each row is a card: the table itself does not scroll sideways, and every figure
+    // carries its column's name.
+    const tableOverflow = await table.evaluate((t) => t.parentElement!.scrollWidth - t.parentElement!.clientWidth);
+    expect(tableOverflow, 'the colorant table fits the phone without sideways scrolling').toBeLessThanOrEqual(0);
+    const stockLabel = await pigmentRow.getByRole('cell').nth(3).evaluate((td) => getComputedStyle(td, '::before').content);
+    expect(stockLabel).toBe('"Stock"');
 
     // The mold library: add one, archive it with the in-place confirm.
     await page.goto(`${baseUrl()}/molds`);
