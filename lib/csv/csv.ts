@@ -1,3 +1,4 @@
+import 'server-only';
 import Papa from 'papaparse';
 
 // CSV through papaparse (unparse and parse), never string joining. Cells that

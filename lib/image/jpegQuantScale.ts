@@ -1,3 +1,4 @@
+import 'server-only';
 /**
  * How coarsely a JPEG was quantised: the mean of its first (luminance) quantisation table divided
  * by the mean of the example luminance table of ITU-T T.81 Annex K.1 (Table K.1, mean 57.6),

@@ -1,3 +1,4 @@
+import 'server-only';
 import { PHOTO_FORMATS, type PhotoFormat } from './limits';
 
 const MAX_NAME = 120;
