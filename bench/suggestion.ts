@@ -17,8 +17,18 @@ const time = (f: () => void) => {
   f();
   return performance.now() - t;
 };
+const timeAsync = async (f: () => Promise<unknown>) => {
+  const t = performance.now();
+  await f();
+  return performance.now() - t;
+};
+const sequence = async (n: number, f: (k: number) => Promise<number>) => {
+  const out: number[] = [];
+  for (let k = 0; k < n; k++) out.push(await f(k));
+  return out;
+};
 
-export function runSuggestionBench(pourCount = 5000) {
+export async function runSuggestionBench(pourCount = 5000) {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'pourproof-bench-'));
   const database = openDatabase(path.join(dir, 'bench.db'), { migrate: true });
   try {
@@ -51,11 +61,11 @@ export function runSuggestionBench(pourCount = 5000) {
     })
     const observations = loadColorHistory(database, teamId);
     const fullFit = time(() => fitColorantModel(observations));
-    const first = time(() => suggestNextPour(database, teamId, lastPour, 2));
-    const cached = Array.from({ length: 30 }, () => time(() => suggestNextPour(database, teamId, lastPour, 2)));
+    const first = await timeAsync(() => suggestNextPour(database, teamId, lastPour, 2));
+    const cached = await sequence(30, () => timeAsync(() => suggestNextPour(database, teamId, lastPour, 2)));
     // A new pour logged in the last match, then its suggestion: the cached fit is kept (the
     // history grew by under 2 %), the match's own pours correct it.
-    const afterNew = Array.from({ length: 10 }, (_, k) => {
+    const afterNew = await sequence(10, (k) => {
       const id = newId();
       database.insert(pours).values({ id, teamId, matchId: lastMatch, number: 6 + k, photoId }).run();
       ['back', 'belly'].forEach((zone, z) => {
@@ -64,7 +74,7 @@ export function runSuggestionBench(pourCount = 5000) {
         const lab = trueLab(doses);
         database.insert(samples).values({ id: newId(), teamId, photoId, purpose: 'pour', matchId: lastMatch, pourId: id, zone, shape: {}, l: lab.l, a: lab.a, b: lab.b, hex: '#000000', pixels: 1, kept: 1, spread: 0, glare: 0, flake: {}, dE00: 9 }).run();
       });
-      return time(() => suggestNextPour(database, teamId, id, 2));
+      return timeAsync(() => suggestNextPour(database, teamId, id, 2));
     });
     return { pours: pourCount, colours: observations.length, fullFitMs: fullFit, firstMs: first, cachedMs: median(cached), afterNewPourMs: median(afterNew) };
   } finally {
@@ -75,10 +85,11 @@ export function runSuggestionBench(pourCount = 5000) {
 
 // Run on its own (`tsx --conditions=react-server bench/suggestion.ts`, so 'server-only' loads).
 if (process.argv[1]?.endsWith('suggestion.ts')) {
-  const r = runSuggestionBench();
-  console.log(`  ${r.pours.toLocaleString('en')} pours, ${r.colours.toLocaleString('en')} logged colours in the shop`);
-  console.log(`  suggestion, model cached:            ${r.cachedMs.toFixed(1)} ms (median of 30; target ≤ 30 ms)`);
-  console.log(`  suggestion right after a new pour:   ${r.afterNewPourMs.toFixed(1)} ms (median of 10; cached fit kept below 2 % growth)`);
-  console.log(`  first suggestion after a restart:    ${r.firstMs.toFixed(0)} ms (fits the model from scratch)`);
-  console.log(`  full refit of the model alone:       ${r.fullFitMs.toFixed(0)} ms (once per 2 % growth of the history)`);
+  void runSuggestionBench().then((r) => {
+    console.log(`  ${r.pours.toLocaleString('en')} pours, ${r.colours.toLocaleString('en')} logged colours in the shop`);
+    console.log(`  suggestion, model cached:            ${r.cachedMs.toFixed(1)} ms (median of 30; target ≤ 30 ms)`);
+    console.log(`  suggestion right after a new pour:   ${r.afterNewPourMs.toFixed(1)} ms (median of 10; cached fit kept below 2 % growth)`);
+    console.log(`  first suggestion after a restart:    ${r.firstMs.toFixed(0)} ms (fits the model from scratch)`);
+    console.log(`  full refit of the model alone:       ${r.fullFitMs.toFixed(0)} ms (once per 2 % growth of the history)`);
+  });
 }

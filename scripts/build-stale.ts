@@ -15,7 +15,7 @@ function newest(p: string): number {
 // True when there is no build in distDir, or a source file changed after it.
 export function buildIsStale(root: string, distDir = '.next'): boolean {
   const id = path.join(root, distDir, 'BUILD_ID');
-  if (!fs.existsSync(id) || !fs.existsSync(path.join(root, distDir, 'workers', 'measure.mjs'))) return true;
+  if (!fs.existsSync(id) || !['measure', 'fit'].every((w) => fs.existsSync(path.join(root, distDir, 'workers', `${w}.mjs`)))) return true;
   const built = fs.statSync(id).mtimeMs;
   return SOURCES.some((s) => newest(path.join(root, s)) > built);
 }

@@ -1,15 +1,18 @@
 import path from 'node:path';
 import { build } from 'esbuild';
-import { measureWorkerFile } from '../lib/image/measureWorkerFile';
+import { WORKERS, workerFile } from '../lib/workerFile';
 
-// Bundles the measuring worker (lib/image/measureWorker.ts) into the Next build
-// folder it serves, after `next build` (which empties that folder). sharp stays
+// Bundles the worker threads (the measuring worker, lib/image/measureWorker.ts,
+// and the model-fitting worker, lib/matches/fitWorker.ts) into the Next build
+// folder they serve, after `next build` (which empties that folder). sharp stays
 // a native module loaded from node_modules.
 export async function buildMeasureWorker(distDir = process.env.NEXT_DIST_DIR || '.next') {
   const root = path.resolve(__dirname, '..');
+  const dist = path.resolve(root, distDir);
   await build({
-    entryPoints: [path.join(root, 'lib/image/measureWorker.ts')],
-    outfile: measureWorkerFile(path.resolve(root, distDir)),
+    entryPoints: Object.fromEntries(Object.entries(WORKERS).map(([name, file]) => [name, path.join(root, file)])),
+    outdir: path.dirname(workerFile('measure', dist)),
+    outExtension: { '.js': '.mjs' },
     bundle: true,
     platform: 'node',
     format: 'esm',

@@ -1,7 +1,7 @@
 import type { loadBatchSheet } from '@/lib/batches/loadBatchSheet';
 import { formatDose, formatMl, formatVolume, trimmed } from '@/lib/format';
 
-export type Sheet = ReturnType<typeof loadBatchSheet>;
+export type Sheet = Awaited<ReturnType<typeof loadBatchSheet>>;
 const th = 'border-b border-panel-line p-2 text-left font-semibold';
 const td = 'border-b border-panel-line p-2 align-top';
 // Columns a phone can do without (they come back on wider screens and on paper).

@@ -14,7 +14,7 @@ import { zoneCupsProblem } from '@/lib/recipes';
 // settings. Molds: the team's active molds, plus the batch's own mold even
 // if it has since been archived; the batch's mold (else the standard's) is
 // marked selected.
-export function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
+export async function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
   const team = database.select().from(teams).where(eq(teams.id, teamId)).get()!;
   const std = database.select().from(pours).where(and(eq(pours.id, batch.standardPourId), eq(pours.teamId, teamId))).get()!;
   const recipe = getRecipe(database, std.id);
@@ -62,7 +62,7 @@ export function loadBatchSheet(database: DB, teamId: string, batch: BatchView) {
   const thicknessOf = (id: string | null) => (id ? database.select({ t: molds.thickness }).from(molds).where(and(eq(molds.id, id), eq(molds.teamId, teamId))).get()?.t ?? null : null);
   const stdThickness = thicknessOf(std.moldId);
   const sheetThickness = thicknessOf(selectedMoldId);
-  const redose = stdThickness && sheetThickness ? thicknessRedose(database, teamId, recipe, stdThickness, sheetThickness) : null;
+  const redose = stdThickness && sheetThickness ? await thicknessRedose(database, teamId, recipe, stdThickness, sheetThickness) : null;
   return {
     thicknessRedose: redose,
     batch: { id: batch.id, createdAt: batch.createdAt, createdBy: batch.createdBy, pass: batch.pass, baits: batch.baits, baitsExpected: batch.baitsExpected, notes: batch.notes },

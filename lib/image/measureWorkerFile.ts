@@ -1,6 +1,6 @@
-import path from 'node:path';
+import { workerFile } from '../workerFile';
 
 /** Where scripts/build-worker.ts writes the measuring worker: beside the Next build it belongs to. */
-export function measureWorkerFile(distDir = process.env.NEXT_DIST_DIR || '.next'): string {
-  return path.resolve(distDir, 'workers', 'measure.mjs');
+export function measureWorkerFile(distDir?: string): string {
+  return workerFile('measure', distDir);
 }

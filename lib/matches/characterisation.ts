@@ -9,8 +9,8 @@ import { shopModel } from './shopModel';
 
 // Which colorants of the library the shop's model can dose, and how well: logged colours with
 // the colorant, calibration swatches, and the model's median ΔE00 on those colours.
-export function colorantCharacterisation(database: DB, teamId: string) {
-  const { model } = shopModel(database, teamId);
+export async function colorantCharacterisation(database: DB, teamId: string) {
+  const { model } = await shopModel(database, teamId);
   const counts = new Map(
     database
       .select({ colorantId: swatches.colorantId, n: sql<number>`count(*)` })

@@ -1,7 +1,8 @@
 import 'server-only';
 import { colorHistoryKeysSince, colorHistoryStamp, loadColorHistory, loadFlakeHistory } from '@/db/queries/colorHistory';
 import type { DB } from '@/db/open';
-import { fitColorantModel, fitFlakeRate, type ColorantModel, type FlakeRate } from '@/lib/color';
+import { fitFlakeRate, type ColorantModel, type FlakeRate } from '@/lib/color';
+import { fitColorantModelOffThread } from './fitPool';
 
 export interface ShopModel {
   model: ColorantModel | null;
@@ -21,6 +22,8 @@ interface Entry extends ShopModel {
 /** Refit in full once the history grew by this share since the last fit. */
 const REFIT_GROWTH = 0.02;
 const cache = new Map<string, Entry>();
+/** A refit under way per team: requests that arrive meanwhile wait for the same one. */
+const fitting = new Map<string, { stamp: string; entry: Promise<Entry> }>();
 
 const median = (v: number[]) => {
   const s = [...v].sort((a, b) => a - b);
@@ -30,8 +33,9 @@ const median = (v: number[]) => {
 // The team's colorant model, cached per team in this process. A new logged colour changes the
 // stamp; the cached fit is kept while the history grew by under REFIT_GROWTH and brought no new
 // colorant (the match's own pours correct it locally meanwhile), else refitted, warm-started
-// from the cached fit. The first request after a restart fits from scratch.
-export function shopModel(database: DB, teamId: string): ShopModel {
+// from the cached fit. The first request after a restart fits from scratch. The fit itself runs
+// on a worker thread (fitPool), so the server keeps answering meanwhile.
+export async function shopModel(database: DB, teamId: string): Promise<ShopModel> {
   const stamp = colorHistoryStamp(database, teamId);
   const hit = cache.get(teamId);
   if (hit && hit.stamp === stamp) return hit;
@@ -45,16 +49,26 @@ export function shopModel(database: DB, teamId: string): ShopModel {
       return hit;
     }
   }
-  return fit(teamId, stamp, loadColorHistory(database, teamId), hit?.model ?? null, database);
+  const running = fitting.get(teamId);
+  if (running && running.stamp === stamp) return running.entry;
+  const entry = fit(teamId, stamp, loadColorHistory(database, teamId), hit?.model ?? null, database);
+  fitting.set(teamId, { stamp, entry });
+  try {
+    return await entry;
+  } finally {
+    if (fitting.get(teamId)?.entry === entry) fitting.delete(teamId);
+  }
 }
 
-function fit(teamId: string, stamp: string, observations: ReturnType<typeof loadColorHistory>, previous: ColorantModel | null, database: DB): Entry {
-  const model = fitColorantModel(observations, previous);
+async function fit(teamId: string, stamp: string, observations: ReturnType<typeof loadColorHistory>, previous: ColorantModel | null, database: DB): Promise<Entry> {
+  // The history is read now, on this thread; only the fit waits for the worker.
+  const flakeHistory = loadFlakeHistory(database, teamId);
+  const model = await fitColorantModelOffThread(observations, previous);
   const doses = new Map<string, number[]>();
   for (const o of observations) for (const [k, d] of Object.entries(o.doses)) doses.set(k, [...(doses.get(k) ?? []), d]);
   const typical = Object.fromEntries([...doses].map(([k, v]) => [k, median(v)]));
   const flake = Object.fromEntries(
-    Object.entries(loadFlakeHistory(database, teamId)).flatMap(([k, obs]) => {
+    Object.entries(flakeHistory).flatMap(([k, obs]) => {
       const r = fitFlakeRate(obs);
       return r ? [[k, r]] : [];
     }),

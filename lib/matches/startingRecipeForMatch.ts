@@ -12,14 +12,14 @@ const MAX_CANDIDATES = 10;
 
 // A first-pour recipe per zone from the match's target and the shop's characterised colorants
 // (or the ones asked for): 409 without a target, 422 naming the colorants to calibrate.
-export function startingRecipeForMatch(database: DB, teamId: string, matchId: string, colorantIds?: string[]) {
+export async function startingRecipeForMatch(database: DB, teamId: string, matchId: string, colorantIds?: string[]) {
   const { zones } = loadMatch(database, teamId, matchId);
   if (zones.length === 0 || zones.some((z) => z.targetL === null)) {
     throw new ApiError(409, 'no_target', 'This match has no target yet: sample every zone on a reference photo first');
   }
   const library = listColorants(database, teamId);
   const modelled = (kind: string) => (MODELLED_KINDS as readonly string[]).includes(kind);
-  const { model, typical } = shopModel(database, teamId);
+  const { model, typical } = await shopModel(database, teamId);
   const known = (c: { id: string; unit: keyof typeof DOSE_STEP }) => (model?.colorants[doseKey(c.id, c.unit)]?.observations ?? 0) >= MIN_OBSERVATIONS;
   let chosen = library.filter((c) => modelled(c.kind));
   if (colorantIds) {

@@ -28,11 +28,11 @@ function learntFrom(model: ColorantModel, keys: string[], names: Map<string, str
 // colorant model, corrected by this match's own pours, predicts bring the next pour nearest
 // the target (lib/color/adviseZone.ts). Applying the changes to the pour's recipe (to: 0 takes
 // a line out) gives a recipe the pour route accepts.
-export function suggestNextPour(database: DB, teamId: string, pourId: string, tolerance: number): PourSuggestion {
+export async function suggestNextPour(database: DB, teamId: string, pourId: string, tolerance: number): Promise<PourSuggestion> {
   const pour = getPour(database, teamId, pourId);
   if (!pour) throw new ApiError(404, 'not_found', 'No such pour in your team');
   const view: PourView = pour;
-  const { model, typical, flake } = shopModel(database, teamId);
+  const { model, typical, flake } = await shopModel(database, teamId);
   const targetFlake = targetFlakeCoverage(database, teamId, pour.matchId);
   const history = loadMatchHistory(database, teamId, pour.matchId, pour.number);
   const library = listColorants(database, teamId);

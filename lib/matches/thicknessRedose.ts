@@ -14,9 +14,9 @@ const MIN_CLASS_COLOURS = 2;
 // A standard's recipe re-dosed for a mold of another thickness class, from the shop's model
 // (fitColorantModel's thickness factors): a prediction, and said to be one. Colorants the model
 // does not dose (flake, additives) stay as they are.
-export function thicknessRedose(database: DB, teamId: string, recipe: Line[], from: Thickness, to: Thickness) {
+export async function thicknessRedose(database: DB, teamId: string, recipe: Line[], from: Thickness, to: Thickness) {
   if (from === to) return null;
-  const t = shopModel(database, teamId).model?.thickness;
+  const t = (await shopModel(database, teamId)).model?.thickness;
   const known = (c: Thickness) => c === 'standard' || (t?.[c].observations ?? 0) >= MIN_CLASS_COLOURS;
   if (!t || !known(from) || !known(to)) {
     const missing = [from, to].filter((c) => !known(c)).join(' and ');

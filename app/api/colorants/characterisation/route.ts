@@ -6,5 +6,5 @@ import { colorantCharacterisation } from '@/lib/matches/characterisation';
 // Which colorants the shop's colour model knows, from how many logged colours, and how well.
 export const GET = withApi(async () => {
   const member = await requireMember();
-  return json(colorantCharacterisation(db(), member.team.id));
+  return json(await colorantCharacterisation(db(), member.team.id));
 });

@@ -20,5 +20,5 @@ export default async function BatchSheetPage({ params }: Params) {
   const { id } = await params;
   const batch = getBatch(db(), member.team.id, id);
   if (!batch) notFound();
-  return <BatchSheet sheet={loadBatchSheet(db(), member.team.id, batch)} />;
+  return <BatchSheet sheet={await loadBatchSheet(db(), member.team.id, batch)} />;
 }

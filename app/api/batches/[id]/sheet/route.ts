@@ -11,5 +11,5 @@ export const GET = withApi<{ id: string }>(async (_req, { params }) => {
   const { id } = await params;
   const batch = getBatch(db(), member.team.id, id);
   if (!batch) throw notFoundError('No such batch in your team');
-  return json(loadBatchSheet(db(), member.team.id, batch));
+  return json(await loadBatchSheet(db(), member.team.id, batch));
 });

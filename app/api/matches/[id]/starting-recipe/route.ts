@@ -11,5 +11,5 @@ export const POST = withApi<{ id: string }>(async (req, { params }) => {
   const member = await requireRole('viewer');
   const { id } = await params;
   const input = await readJson(req, startingRecipeSchema);
-  return json(startingRecipeForMatch(db(), member.team.id, id, input.colorantIds));
+  return json(await startingRecipeForMatch(db(), member.team.id, id, input.colorantIds));
 });

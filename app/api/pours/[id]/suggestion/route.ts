@@ -16,5 +16,5 @@ export const GET = withApi<{ id: string }>(async (_req, { params }) => {
     .where(and(eq(pours.id, id), eq(pours.teamId, member.team.id)))
     .get();
   if (!row) throw notFoundError('No such pour in your team');
-  return json(suggestNextPour(db(), member.team.id, id, row.tolerance));
+  return json(await suggestNextPour(db(), member.team.id, id, row.tolerance));
 });
