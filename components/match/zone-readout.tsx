@@ -17,7 +17,7 @@ export function ZoneReadout({ zone, targetFlake, tolerance }: { zone: Zone; targ
       <DeltaReadout d={zone} direction={zone.direction.text} uncertainty={zone.uncertainty} extra={verdict ? <span className="font-medium">{verdict.text}</span> : undefined} />
       <InFrameLine inFrame={zone.inFrame as never} />
       <p className="num text-ink-soft">
-        Pour L* {zone.lab.l.toFixed(1)} a* {zone.lab.a.toFixed(1)} b* {zone.lab.b.toFixed(1)} · target L* {zone.target.lab.l.toFixed(1)} a* {zone.target.lab.a.toFixed(1)} b* {zone.target.lab.b.toFixed(1)}
+        Pour L* {zone.lab.l.toFixed(1)} a* {zone.lab.a.toFixed(1)} b* {zone.lab.b.toFixed(1)}{zone.regionUncertainty ? ` ± ${zone.regionUncertainty.toFixed(2)} ΔE00` : ''} · target L* {zone.target.lab.l.toFixed(1)} a* {zone.target.lab.a.toFixed(1)} b* {zone.target.lab.b.toFixed(1)}
       </p>
       <p className="num text-ink-soft">
         Flake {flake ? pct(flake.coverage) : '—'}{targetFlake === undefined || targetFlake === null ? '' : ` (target ${pct(targetFlake)})`} · glare {pct(zone.glare)} · spread {zone.spread.toFixed(1)} ΔE00
