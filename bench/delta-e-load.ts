@@ -6,10 +6,9 @@ import autocannon from 'autocannon';
 import { openDatabase } from '../db/open';
 import { seedDemo } from '../scripts/seed/seed-demo';
 import { healthUnderMeasure, type HealthUnderMeasure } from './health-under-measure';
-import { measurePageWeights, type PageWeights, weighedPages } from './page-weight';
 import { type ReadLoad, runReadLoad } from './read-load';
 
-export type LoadResult = { pageWeights: PageWeights; reads: ReadLoad; health: HealthUnderMeasure; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
+export type LoadResult = { reads: ReadLoad; health: HealthUnderMeasure; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
 
 // POST /api/delta-e under load against `next start` (production build in
 // .next, built by the caller), 10 s with 32 connections, as a signed-in member.
@@ -48,9 +47,7 @@ export async function runDeltaELoad(root: string, port = 3199, seconds = 10): Pr
     const reads = await runReadLoad(base, cookie);
     const refusals = await timeRefusals(base, cookie);
     const health = await healthUnderMeasure(base);
-    const pageWeights = await measurePageWeights(base, cookie, await weighedPages(base, cookie));
     return {
-      pageWeights,
       reads,
       health,
       refusals,

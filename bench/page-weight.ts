@@ -3,7 +3,7 @@ import { chromium } from 'playwright-core';
 
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 
-export type PageWeight = { label: string; path: string; onLoadKB: number; scrolledKB: number; files: number };
+export type PageWeight = { key: string; label: string; path: string; onLoadKB: number; scrolledKB: number; files: number; scripts: { url: string; bytes: number }[] };
 export type PageWeights = { pages: PageWeight[]; skipped?: string };
 
 /**
@@ -14,7 +14,7 @@ export type PageWeights = { pages: PageWeight[]; skipped?: string };
  * second figure keeps going: it scrolls to the foot of the page, so chunks loaded only when a
  * part comes into view (lazy charts, forms) are counted too. kB = 1000 bytes.
  */
-export async function measurePageWeights(base: string, cookie: string, pages: { label: string; path: string }[]): Promise<PageWeights> {
+export async function measurePageWeights(base: string, cookie: string, pages: { key: string; label: string; path: string }[]): Promise<PageWeights> {
   if (!fs.existsSync(CHROMIUM)) return { pages: [], skipped: `no Chromium at ${CHROMIUM}` };
   const browser = await chromium.launch({ executablePath: CHROMIUM, headless: true, args: ['--no-sandbox', '--disable-gpu'] });
   const name = cookie.slice(0, cookie.indexOf('='));
@@ -25,11 +25,11 @@ export async function measurePageWeights(base: string, cookie: string, pages: { 
       const context = await browser.newContext({ viewport: { width: 390, height: 844 }, deviceScaleFactor: 3, isMobile: true, hasTouch: true });
       await context.addCookies([{ name, value, url: base }]);
       const page = await context.newPage();
-      const scripts: Promise<number>[] = [];
+      const scripts: Promise<{ url: string; bytes: number }>[] = [];
       page.on('requestfinished', (req) => {
-        if (req.resourceType() === 'script') scripts.push(req.sizes().then((s) => s.responseBodySize));
+        if (req.resourceType() === 'script') scripts.push(req.sizes().then((s) => ({ url: new URL(req.url()).pathname, bytes: s.responseBodySize })));
       });
-      const sum = async () => (await Promise.all(scripts)).reduce((a, b) => a + b, 0);
+      const sum = async () => (await Promise.all(scripts)).reduce((a, b) => a + b.bytes, 0);
       await page.goto(`${base}${p.path}`, { waitUntil: 'networkidle' });
       const onLoad = await sum();
       // Scroll to the foot in screen-high steps, letting whatever comes into view load.
@@ -41,8 +41,8 @@ export async function measurePageWeights(base: string, cookie: string, pages: { 
         await page.waitForTimeout(150);
         if (atEnd) break;
       }
-      await page.waitForLoadState('networkidle');
-      out.push({ label: p.label, path: p.path, onLoadKB: onLoad / 1000, scrolledKB: (await sum()) / 1000, files: scripts.length });
+      await settle(page, scripts);
+      out.push({ key: p.key, label: p.label, path: p.path, onLoadKB: onLoad / 1000, scrolledKB: (await sum()) / 1000, files: scripts.length, scripts: await Promise.all(scripts) });
       await context.close();
     }
     return { pages: out };
@@ -51,13 +51,13 @@ export async function measurePageWeights(base: string, cookie: string, pages: { 
   }
 }
 
-// The two pages of the weight goals: the Matches list, and the match with the most pours (its
-// charts, pours and batches all on show).
-export async function weighedPages(base: string, cookie: string) {
-  const list = (await (await fetch(`${base}/api/matches`, { headers: { cookie } })).json()) as { id: string; pours?: unknown[] }[];
-  const busiest = list.reduce((a, b) => ((b.pours?.length ?? 0) > (a.pours?.length ?? 0) ? b : a));
-  return [
-    { label: 'the match page', path: `/matches/${busiest.id}` },
-    { label: 'the Matches list', path: '/matches' },
-  ];
+// Waits until no script has been requested for a second (lazy parts start loading a moment after
+// they come into view).
+async function settle(page: import('playwright-core').Page, scripts: unknown[]) {
+  let seen = -1;
+  for (let i = 0; i < 30 && seen !== scripts.length; i++) {
+    seen = scripts.length;
+    await page.waitForTimeout(1000);
+  }
+  await page.waitForLoadState('networkidle');
 }

@@ -5,6 +5,7 @@ import { run } from '../scripts/run';
 import { runDeltaELoad } from './delta-e-load';
 import { runMeasureBench } from './measure';
 import { printNextPourSim } from './next-pour-sim';
+import { printPageWeights, weighPages } from './weigh-pages';
 
 // `npm run bench`: figures and ratios measured in this one run. Nothing here
 // passes or fails; the targets are printed beside the figures.
@@ -38,19 +39,14 @@ async function main() {
   console.log(`  POST /api/delta-e / bare health: ${(l.rps / r.healthRps).toFixed(2)} (goal ≥ 0.7)`);
   console.log(`  GET /api/me (the session check alone) / bare health: ${r.meRps.toFixed(0)} / ${r.healthRps.toFixed(0)} = ${(r.meRps / r.healthRps).toFixed(2)} (goal ≥ 0.8)`);
   console.log(`  GET /api/matches/:id at a steady 100 requests/s: p50 ${r.matchP50} ms, p99 ${r.matchP99} ms (goal p99 ≤ 50 ms; ${r.matchNon2xx} non-2xx)`);
-  console.log('\n== JavaScript a phone downloads cold (Chromium at 390 px, empty cache, gzip from next start)');
-  const w = l.pageWeights;
-  if (w.skipped) console.log(`  skipped: ${w.skipped}`);
-  const goals: Record<string, number> = { 'the match page': 200, 'the Matches list': 150 };
-  for (const p of w.pages) {
-    console.log(`  ${p.label}: ${p.onLoadKB.toFixed(0)} kB on load (goal ≤ ${goals[p.label]} kB), ${p.scrolledKB.toFixed(0)} kB after scrolling to its foot (${p.files} scripts)`);
-  }
   console.log('\n== /api/measure refusing bad photos (slowest of 3; target well under 2 s)');
   for (const r of l.refusals) console.log(`  ${r.label}: ${r.status} in ${r.ms.toFixed(0)} ms`);
   const h = l.health;
   console.log('\n== /api/health while six heavy measurements run (20 MP JPEG, 16 outlines each, three members × two)');
   console.log(`  measurements answered ${h.statuses.join(', ')} in ${h.measureMs.toFixed(0)} ms`);
   console.log(`  health: ${h.healthCount} answers, p50 ${h.healthP50.toFixed(1)} ms, p95 ${h.healthP95.toFixed(1)} ms, max ${h.healthMax.toFixed(1)} ms (goal: every answer ≤ 100 ms)`);
+  console.log('\n== JavaScript a phone downloads cold (Chromium at 390 px, empty cache, gzip from next start; the demo shop with its pours)');
+  printPageWeights(await weighPages(root));
 }
 
 main().catch((err) => {
