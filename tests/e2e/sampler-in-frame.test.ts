@@ -27,7 +27,9 @@ async function sideBySidePng(left: { back: Lab; belly: Lab }, right: { back: Lab
 // Presses the mouse at `from`, moves to `to` in steps and leaves the button down: the shape is
 // being drawn. Fractions of the drawing surface.
 async function startDrag(page: Page, from: [number, number], to: [number, number]) {
-  const box = (await page.getByRole('img', { name: /Drawing surface/ }).boundingBox())!;
+  const surface = page.getByRole('img', { name: /Drawing surface/ });
+  await surface.scrollIntoViewIfNeeded();
+  const box = (await surface.boundingBox())!;
   await page.mouse.move(box.x + from[0] * box.width, box.y + from[1] * box.height);
   await page.mouse.down();
   await page.mouse.move(box.x + to[0] * box.width, box.y + to[1] * box.height, { steps: 6 });
@@ -85,7 +87,10 @@ describe.runIf(browserAvailable())('browser: the sampler warns live; the batch f
       const ref = await uploadPhoto(maker, await std(STANDARD), 'reference');
       expect((await api(`/api/matches/${matchId}/target`, { cookie: maker, body: { photoId: ref.id, zones: ZONES } })).status).toBe(200);
       const shot = await uploadPhoto(maker, await std(STANDARD), 'pour');
-      const pour = await api(`/api/matches/${matchId}/pours`, { cookie: maker, body: { photoId: shot.id, recipe: [], zones: ZONES } });
+      // A standard needs a recipe to be signed off.
+      const pigment = ((await api('/api/colorants', { cookie: maker })).body as { id: string; kind: string; unit: string }[]).find((c) => c.kind === 'pigment' && c.unit === 'drops')!;
+      const recipe = [{ zone: 'back', colorantId: pigment.id, amount: 6, unit: 'drops' }, { zone: 'belly', colorantId: pigment.id, amount: 2, unit: 'drops' }];
+      const pour = await api(`/api/matches/${matchId}/pours`, { cookie: maker, body: { photoId: shot.id, recipe, zones: ZONES } });
       expect(pour.status).toBe(201);
       expect((await api(`/api/pours/${pour.body.id}/submit`, { cookie: maker, body: {} })).status).toBe(200);
       expect((await api(`/api/pours/${pour.body.id}/sign-off`, { cookie: lead, body: { decision: 'approved' } })).status).toBe(200);
