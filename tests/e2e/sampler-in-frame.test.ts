@@ -129,6 +129,12 @@ describe.runIf(browserAvailable())('browser: the sampler warns live; the batch f
       }
       // Every ΔE00 of the readout carries its ±.
       expect(await result.getByLabel(/^plus or minus \d/).count()).toBe(2);
+      // …and so does every colour: the batch's and the standard's Lab in the batch readout, the
+      // target's on the stage, the pour's and the target's in the pour's readout.
+      expect((await result.textContent())!.match(/Batch L\* [\d.−-]+ a\* [\d.−-]+ b\* [\d.−-]+ ± \d+\.\d\d ΔE00/g)).toHaveLength(2);
+      expect((await page.getByRole('list', { name: 'Target colours' }).textContent())!.match(/± \d+\.\d\d ΔE00/g)).toHaveLength(2);
+      const pourText = (await page.getByRole('region', { name: 'Pour #1 against the target' }).textContent())!;
+      expect(pourText.match(/Pour L\* [^·]+ ± \d+\.\d\d ΔE00 · target L\* [^±]+ ± \d+\.\d\d ΔE00/g)).toHaveLength(2);
       await page.screenshot({ path: artifactPath(`batch-in-frame-result-${viewport.width}.png`), fullPage: true });
 
       const batchId = new URL(page.url()).searchParams.get('batch');
