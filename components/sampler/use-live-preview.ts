@@ -45,7 +45,7 @@ export function useLivePreview(src: string, shapes: Record<string, Shape>) {
         const key = JSON.stringify(shape);
         let hit = cache.current.get(zone);
         if (!hit || hit.key !== key) {
-          hit = { key, preview: previewRegion(px.data, px.width, px.height, shape) };
+          hit = { key, preview: safePreview(px, shape) };
           cache.current.set(zone, hit);
         }
         if (hit.preview) next[zone] = hit.preview;
@@ -60,4 +60,13 @@ export function useLivePreview(src: string, shapes: Record<string, Shape>) {
   }, [ready, shapes]);
 
   return previews;
+}
+
+// A preview is a help, never a blocker: if it cannot be worked out, the zone shows none.
+function safePreview(px: { data: Uint8ClampedArray; width: number; height: number }, shape: Shape): Preview | null {
+  try {
+    return previewRegion(px.data, px.width, px.height, shape);
+  } catch {
+    return null;
+  }
 }
