@@ -5,6 +5,7 @@ import { run } from '../scripts/run';
 import { runDeltaELoad } from './delta-e-load';
 import { runMeasureBench } from './measure';
 import { printNextPourSim } from './next-pour-sim';
+import { printPageWeights, weighPages } from './weigh-pages';
 
 // `npm run bench`: figures and ratios measured in this one run. Nothing here
 // passes or fails; the targets are printed beside the figures.
@@ -44,6 +45,8 @@ async function main() {
   console.log('\n== /api/health while six heavy measurements run (20 MP JPEG, 16 outlines each, three members × two)');
   console.log(`  measurements answered ${h.statuses.join(', ')} in ${h.measureMs.toFixed(0)} ms`);
   console.log(`  health: ${h.healthCount} answers, p50 ${h.healthP50.toFixed(1)} ms, p95 ${h.healthP95.toFixed(1)} ms, max ${h.healthMax.toFixed(1)} ms (goal: every answer ≤ 100 ms)`);
+  console.log('\n== JavaScript a phone downloads cold (Chromium at 390 px, empty cache, gzip from next start; the demo shop with its pours)');
+  printPageWeights(await weighPages(root));
 }
 
 main().catch((err) => {

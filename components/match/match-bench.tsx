@@ -1,11 +1,12 @@
 'use client';
 
+import dynamic from 'next/dynamic';
 import { useRouter, useSearchParams } from 'next/navigation';
 import { useState } from 'react';
 import useSWR from 'swr';
 import { MatchBatches } from '@/components/production/match-batches';
 import { SignOffPanel } from '@/components/production/signoff-panel';
-import { NEUTRAL } from '@/components/sampler/photo-sampler';
+import { NEUTRAL } from '@/components/sampler/sampler-store';
 import { Button } from '@/components/ui/button';
 import type { MatchDetail } from '@/db/queries/matchDetail';
 import type { PourView } from '@/db/queries/pours';
@@ -17,12 +18,18 @@ import { DeltaChart } from './delta-chart';
 import { EditMatch } from './edit-match';
 import { FocusFirstField, JumpBar } from './match-sections';
 import { PourCompare } from './pour-compare';
-import { PourForm } from './pour-form';
 import { PourList } from './pour-list';
 import { ArchiveControl } from './archive-control';
 import { StatusBadge } from './status-badge';
-import { TargetSampling } from './target-panel';
 import { TargetSwatches } from './target-swatches';
+
+// Loaded when they are shown, not with the page: the forms (sampler, upload, schema checks) only
+// when the maker opens one.
+const loading = (what: string) => function Loading() {
+  return <p role="status" className="text-ink-soft">Loading {what}…</p>;
+};
+const PourForm = dynamic(() => import('./pour-form').then((m) => m.PourForm), { loading: loading('the pour form') });
+const TargetSampling = dynamic(() => import('./target-panel').then((m) => m.TargetSampling), { loading: loading('the sampler') });
 
 type Production = { canDecide: boolean; sprueAllowanceMl: number; volumeUnit?: VolumeUnit };
 

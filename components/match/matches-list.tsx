@@ -1,12 +1,17 @@
 'use client';
 
+import dynamic from 'next/dynamic';
 import { useState } from 'react';
 import useSWR from 'swr';
 import { Button } from '@/components/ui/button';
 import type { MatchView } from '@/db/queries/matches';
 import { swrFetcher } from '@/lib/http/client';
 import { MatchesTable } from './matches-table';
-import { NewMatchForm } from './new-match-form';
+
+// The form (and its schema checks) loads when "New match" is pressed, not with the list.
+const NewMatchForm = dynamic(() => import('./new-match-form').then((m) => m.NewMatchForm), {
+  loading: () => <p role="status" className="text-ink-soft">Loading the form…</p>,
+});
 
 export function MatchesList({ canCreate, defaultTolerance }: { canCreate: boolean; defaultTolerance: number }) {
   const { data, error, isLoading } = useSWR<MatchView[]>('/api/matches', swrFetcher);

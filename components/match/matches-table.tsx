@@ -1,17 +1,8 @@
 'use client';
 
-import {
-  type ColumnDef,
-  type SortingState,
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getSortedRowModel,
-  useReactTable,
-} from '@tanstack/react-table';
 import Link from 'next/link';
 import { When } from '@/components/ui/when';
-import { useMemo, useState } from 'react';
+import { type ReactNode, useMemo, useState } from 'react';
 import { BandBadge } from '@/components/color/band-badge';
 import { inputClass } from '@/components/ui/field';
 import type { MatchView } from '@/db/queries/matches';
@@ -29,21 +20,25 @@ const worstDelta = (m: MatchView) => {
   return zs.length ? Math.max(...zs.map((z) => z.dE00!)) : Number.POSITIVE_INFINITY;
 };
 
-const columns: ColumnDef<MatchView>[] = [
+// Each column: how it sorts (none for Zones) and how its cell reads. Text sorts A→Z first,
+// figures and dates highest first; a third press on a header drops the sort.
+type Column = { id: string; header: string; sort?: (m: MatchView) => string | number; cell: (m: MatchView) => ReactNode; wide?: boolean };
+const columns: Column[] = [
   {
-    accessorKey: 'name',
+    id: 'name',
     header: 'Match',
-    cell: ({ row }) => <Link href={`/matches/${row.original.id}`} className="font-medium text-accent underline-offset-2 hover:underline">{row.original.name}</Link>,
+    sort: (m) => m.name.toLowerCase(),
+    cell: (m) => <Link href={`/matches/${m.id}`} className="font-medium text-accent underline-offset-2 hover:underline">{m.name}</Link>,
   },
-  { accessorKey: 'status', header: 'Status', cell: ({ getValue }) => <StatusBadge status={getValue<string>()} />, filterFn: 'equalsString' },
-  { id: 'zones', header: 'Zones', accessorFn: (m) => m.zones.join(', '), enableSorting: false, meta: { wide: true } },
-  { id: 'pours', header: 'Pours', accessorFn: (m) => m.pours.length, meta: { num: true, wide: true } },
+  { id: 'status', header: 'Status', sort: (m) => m.status, cell: (m) => <StatusBadge status={m.status} /> },
+  { id: 'zones', header: 'Zones', cell: (m) => m.zones.join(', '), wide: true },
+  { id: 'pours', header: 'Pours', sort: (m) => m.pours.length, cell: (m) => m.pours.length, wide: true },
   {
     id: 'latest',
     header: 'Latest ΔE00 per zone',
-    accessorFn: worstDelta,
-    cell: ({ row }) => {
-      const pour = latestPour(row.original);
+    sort: worstDelta,
+    cell: (m) => {
+      const pour = latestPour(m);
       if (!pour) return <span className="text-ink-soft">no pours yet</span>;
       return (
         <ul className="space-y-0.5">
@@ -58,33 +53,44 @@ const columns: ColumnDef<MatchView>[] = [
       );
     },
   },
-  { id: 'activity', header: 'Last activity', accessorFn: (m) => m.updatedAt, cell: ({ getValue }) => <When at={getValue<number>()} dayOnly />, meta: { wide: true } },
-  { id: 'maker', header: 'Started by', accessorFn: (m) => m.createdBy ?? '—', meta: { wide: true } },
+  { id: 'activity', header: 'Last activity', sort: (m) => m.updatedAt, cell: (m) => <When at={m.updatedAt} dayOnly />, wide: true },
+  { id: 'maker', header: 'Started by', sort: (m) => m.createdBy ?? '—', cell: (m) => m.createdBy ?? '—', wide: true },
 ];
 
 // At phone width the table keeps what a maker scans for — the match, its
 // status and the latest ΔE00 — and leaves the rest to wider screens; the
 // match's name stays pinned at the left if the table still scrolls.
-function cellClass(id: string, meta: unknown): string {
-  if ((meta as { wide?: boolean } | undefined)?.wide) return 'hidden md:table-cell';
-  return id === 'name' ? 'sticky left-0 z-10 bg-inherit' : '';
+function cellClass(c: Column): string {
+  if (c.wide) return 'hidden md:table-cell';
+  return c.id === 'name' ? 'sticky left-0 z-10 bg-inherit' : '';
 }
 
+type Sorting = { id: string; desc: boolean } | null;
+const ascFirst = (c: Column, data: MatchView[]) => data.length > 0 && typeof c.sort!(data[0]!) === 'string';
+
+// Sorting and filtering by hand (a few dozen lines instead of a table library in the browser).
 export function MatchesTable({ data }: { data: MatchView[] }) {
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'activity', desc: true }]);
+  const [sorting, setSorting] = useState<Sorting>({ id: 'activity', desc: true });
   const [search, setSearch] = useState('');
   const [status, setStatus] = useState('');
-  const columnFilters = useMemo(() => (status ? [{ id: 'status', value: status }] : []), [status]);
-  const table = useReactTable({
-    data,
-    columns,
-    state: { sorting, globalFilter: search, columnFilters },
-    onSortingChange: setSorting,
-    getCoreRowModel: getCoreRowModel(),
-    getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    globalFilterFn: (row, _id, value: string) => row.original.name.toLowerCase().includes(value.toLowerCase()) || (row.original.notes ?? '').toLowerCase().includes(value.toLowerCase()),
-  });
+  const rows = useMemo(() => {
+    const q = search.toLowerCase();
+    const kept = data.filter((m) => (!status || m.status === status) && (!q || m.name.toLowerCase().includes(q) || (m.notes ?? '').toLowerCase().includes(q)));
+    const col = sorting && columns.find((c) => c.id === sorting.id);
+    if (!col?.sort) return kept;
+    const key = col.sort;
+    const sign = sorting!.desc ? -1 : 1;
+    return [...kept].sort((a, b) => {
+      const x = key(a), y = key(b);
+      return sign * (x < y ? -1 : x > y ? 1 : 0);
+    });
+  }, [data, search, status, sorting]);
+  const toggle = (c: Column) => {
+    const first = !ascFirst(c, data);
+    if (sorting?.id !== c.id) return setSorting({ id: c.id, desc: first });
+    if (sorting.desc === first) return setSorting({ id: c.id, desc: !first });
+    setSorting(null);
+  };
   return (
     <div>
       <div className="mb-3 flex flex-wrap gap-3">
@@ -103,37 +109,33 @@ export function MatchesTable({ data }: { data: MatchView[] }) {
       <div className="overflow-x-auto rounded-lg border border-panel-line bg-white">
         <table className="w-full text-left text-sm" aria-label="Matches">
           <thead className="bg-panel-deep [&_tr]:bg-panel-deep">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} className={`p-0 ${cellClass(h.column.id, h.column.columnDef.meta)}`} aria-sort={sorted ? SORT_ARIA[sorted] : undefined}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="flex min-h-tap w-full items-center gap-1 p-3 text-left font-semibold">
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden className="text-ink-soft">{sorted ? SORT_MARK[sorted] : '↕'}</span>
-                        </button>
-                      ) : (
-                        <span className="block p-3 font-semibold">{flexRender(h.column.columnDef.header, h.getContext())}</span>
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
+            <tr>
+              {columns.map((c) => {
+                const sorted = sorting?.id === c.id ? (sorting.desc ? 'desc' : 'asc') : false;
+                return (
+                  <th key={c.id} className={`p-0 ${cellClass(c)}`} aria-sort={sorted ? SORT_ARIA[sorted] : undefined}>
+                    {c.sort ? (
+                      <button type="button" onClick={() => toggle(c)} className="flex min-h-tap w-full items-center gap-1 p-3 text-left font-semibold">
+                        {c.header}
+                        <span aria-hidden className="text-ink-soft">{sorted ? SORT_MARK[sorted] : '↕'}</span>
+                      </button>
+                    ) : (
+                      <span className="block p-3 font-semibold">{c.header}</span>
+                    )}
+                  </th>
+                );
+              })}
+            </tr>
           </thead>
           <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-t border-panel-line bg-white align-top">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={`p-3 ${cellClass(cell.column.id, cell.column.columnDef.meta)}`}>{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
-                ))}
+            {rows.map((m) => (
+              <tr key={m.id} className="border-t border-panel-line bg-white align-top">
+                {columns.map((c) => <td key={c.id} className={`p-3 ${cellClass(c)}`}>{c.cell(m)}</td>)}
               </tr>
             ))}
           </tbody>
         </table>
-        {table.getRowModel().rows.length === 0 ? <p className="p-4 text-ink-soft">No match fits this search.</p> : null}
+        {rows.length === 0 ? <p className="p-4 text-ink-soft">No match fits this search.</p> : null}
       </div>
     </div>
   );

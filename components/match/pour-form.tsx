@@ -6,6 +6,7 @@ import { useForm } from 'react-hook-form';
 import useSWR from 'swr';
 import { HeatCaution } from '@/components/safety/heat-caution';
 import { NEUTRAL, PhotoSampler } from '@/components/sampler/photo-sampler';
+import { comparedZones, InFrameToggle, samplerZones } from '@/components/sampler/reference-in-frame';
 import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
@@ -23,8 +24,6 @@ import { type ColorantOption, RecipeLines } from './recipe-lines';
 import { StartingRecipeButton } from './starting-recipe-button';
 
 type Props = { match: MatchDetail; initialShapes: Record<string, Shape>; previous?: PourView; onSaved: (pourId: string) => void };
-
-const refName = (zone: string) => `${zone} (reference)`;
 
 export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
   const { data: colorants } = useSWR<ColorantOption[]>('/api/colorants', swrFetcher);
@@ -77,7 +76,7 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
           tempF: parsed.tempF,
           notes: parsed.notes || undefined,
           correctsPourId: parsed.correctsPourId || undefined,
-          zones: match.zones.map((name) => ({ name, shape: shapes[name], ...(withRef && shapes[refName(name)] ? { reference: shapes[refName(name)] } : {}) })),
+          zones: comparedZones(match.zones, shapes, withRef ? 'reference' : null),
           neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL], ...(match.lastNeutral?.L ? { L: match.lastNeutral.L } : {}) } : undefined,
         }),
       });
@@ -121,11 +120,10 @@ export function PourForm({ match, initialShapes, previous, onSaved }: Props) {
       ) : null}
       {photo ? (
         <>
-          <label className="flex items-center gap-2 text-sm">
-            <input type="checkbox" checked={withRef} onChange={(e) => setWithRef(e.target.checked)} />
+          <InFrameToggle checked={withRef} onChange={setWithRef}>
             The reference bait lies in this photo too: mark its zones (compared under the same light, no card needed)
-          </label>
-          <PhotoSampler key={withRef ? 'with-reference' : 'pour-only'} src={`/api/photos/${photo.photoId}/image`} width={photo.width} height={photo.height} zones={withRef ? [...match.zones, ...match.zones.map(refName)] : match.zones} initialShapes={{ ...initialShapes, ...shapes }} withNeutral onChange={onShapes} />
+          </InFrameToggle>
+          <PhotoSampler key={withRef ? 'with-reference' : 'pour-only'} src={`/api/photos/${photo.photoId}/image`} width={photo.width} height={photo.height} zones={samplerZones(match.zones, withRef ? 'reference' : null)} initialShapes={{ ...initialShapes, ...shapes }} withNeutral onChange={onShapes} />
           <CardCarriedNote neutral={match.lastNeutral} marked={Boolean(shapes[NEUTRAL])} />
           {shapes[NEUTRAL] || match.lastNeutral ? null : (
             <p className="text-sm text-ink-soft">

@@ -9,7 +9,7 @@ const pct = (v: number) => `${(v * 100).toFixed(1)} %`;
 // The figures beside the stage: ΔE00 large with its band, the components and
 // the direction in words, the ± and the verdict it allows, the reference in frame, flake and glare
 // of the trial, and how the light was handled.
-export function ZoneReadout({ zone, targetFlake, tolerance }: { zone: Zone; targetFlake?: number | null; tolerance?: number }) {
+export function ZoneReadout({ zone, targetFlake, targetUncertainty, tolerance }: { zone: Zone; targetFlake?: number | null; targetUncertainty?: number | null; tolerance?: number }) {
   const flake = zone.flake as { coverage: number } | null;
   const verdict = tolerance === undefined ? null : verdictWords(zone.dE00, tolerance, zone.uncertainty);
   return (
@@ -17,7 +17,7 @@ export function ZoneReadout({ zone, targetFlake, tolerance }: { zone: Zone; targ
       <DeltaReadout d={zone} direction={zone.direction.text} uncertainty={zone.uncertainty} extra={verdict ? <span className="font-medium">{verdict.text}</span> : undefined} />
       <InFrameLine inFrame={zone.inFrame as never} />
       <p className="num text-ink-soft">
-        Pour L* {zone.lab.l.toFixed(1)} a* {zone.lab.a.toFixed(1)} b* {zone.lab.b.toFixed(1)} · target L* {zone.target.lab.l.toFixed(1)} a* {zone.target.lab.a.toFixed(1)} b* {zone.target.lab.b.toFixed(1)}
+        Pour L* {zone.lab.l.toFixed(1)} a* {zone.lab.a.toFixed(1)} b* {zone.lab.b.toFixed(1)}{zone.regionUncertainty ? ` ± ${zone.regionUncertainty.toFixed(2)} ΔE00` : ''} · target L* {zone.target.lab.l.toFixed(1)} a* {zone.target.lab.a.toFixed(1)} b* {zone.target.lab.b.toFixed(1)}{targetUncertainty ? ` ± ${targetUncertainty.toFixed(2)} ΔE00` : ''}
       </p>
       <p className="num text-ink-soft">
         Flake {flake ? pct(flake.coverage) : '—'}{targetFlake === undefined || targetFlake === null ? '' : ` (target ${pct(targetFlake)})`} · glare {pct(zone.glare)} · spread {zone.spread.toFixed(1)} ΔE00

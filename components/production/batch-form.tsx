@@ -6,6 +6,7 @@ import { useForm } from 'react-hook-form';
 import useSWR from 'swr';
 import { z } from 'zod';
 import { NEUTRAL, PhotoSampler } from '@/components/sampler/photo-sampler';
+import { comparedZones, InFrameToggle, referenceZone, samplerZones } from '@/components/sampler/reference-in-frame';
 import { Button } from '@/components/ui/button';
 import { Field, inputClass } from '@/components/ui/field';
 import { FormError } from '@/components/ui/form-error';
@@ -23,6 +24,7 @@ import { MAX_BAITS, MAX_BATCH_CUPS } from '@/lib/validations/production';
 import { formatMl, trimmed } from '@/lib/format';
 import { BatchRunFields } from './batch-run-fields';
 
+const RETAINED = 'retained standard';
 type Mold = { id: string; name: string; cavities: number; mlPerCavity: number };
 type Colorant = { id: string; name: string; kind: string };
 // Number inputs give strings: empty is "not given", anything else a number (NaN fails).
@@ -85,6 +87,9 @@ function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefi
   const [baseId, setBaseId] = useState(bases[0]?.id ?? '');
   const [photo, setPhoto] = useState<UploadedPhoto | null>(null);
   const [shapes, setShapes] = useState<Record<string, Shape>>({});
+  // The retained standard lying in the QC photo too, its zones marked: compared under the same light.
+  const [withStd, setWithStd] = useState(false);
+  const inFrame = withStd ? RETAINED : null;
   const [error, setError] = useState<string | null>(null);
   const onShapes = useCallback((s: Record<string, Shape>) => setShapes(s), []);
   const { register, handleSubmit, watch, formState } = useForm<Values>({
@@ -107,6 +112,7 @@ function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefi
     setError(null);
     if (!photo) return setError('Add the QC photo of this batch first.');
     if (missing.length) return setError(`Mark every zone of the standard on the photo (missing: ${missing.join(', ')}).`);
+    if (inFrame && !zones.some((z) => shapes[referenceZone(z, inFrame)])) return setError('Mark at least one zone of the retained standard in the photo, or untick it.');
     if (sizeError || splitError) return setError(sizeError ? `Batch size: ${sizeError}.` : `Each side’s cup: ${splitError}.`);
     const v = formSchema.parse(raw);
     try {
@@ -114,7 +120,7 @@ function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefi
         method: 'POST',
         body: JSON.stringify({
           photoId: photo.photoId,
-          zones: zones.map((name) => ({ name, shape: shapes[name] })),
+          zones: comparedZones(zones, shapes, inFrame),
           neutral: shapes[NEUTRAL] ? { shape: shapes[NEUTRAL], ...(neutral?.L ? { L: neutral.L } : {}) } : undefined,
           cups: toCups(v.size, unit),
           zoneCups,
@@ -171,12 +177,16 @@ function BatchFormFields({ matchId, sprueAllowanceMl, volumeUnit = 'cups', prefi
       {photo ? (
         <>
           <p className="text-sm">The zones start where they were on the standard pour’s photo. If one does not sit on this batch’s baits, pick it and draw it again; mark the grey card too, if one is in frame.</p>
+          <InFrameToggle checked={withStd} onChange={setWithStd}>
+            The retained standard lies in this photo too: mark its zones (compared under the same light, no card needed; shown beside the check against the standard and on the batch sheet)
+          </InFrameToggle>
           <PhotoSampler
+            key={withStd ? 'with-standard' : 'batch-only'}
             src={`/api/photos/${photo.photoId}/image`}
             width={photo.width}
             height={photo.height}
-            zones={zones}
-            initialShapes={{ ...Object.fromEntries(std.zones.map((z) => [z.name, z.shape as Shape])), ...(neutral ? { [NEUTRAL]: neutral.shape } : {}) }}
+            zones={samplerZones(zones, inFrame)}
+            initialShapes={{ ...Object.fromEntries(std.zones.map((z) => [z.name, z.shape as Shape])), ...(neutral ? { [NEUTRAL]: neutral.shape } : {}), ...shapes }}
             withNeutral
             onChange={onShapes}
           />

@@ -59,7 +59,7 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
           <div className="space-y-1 text-sm">
             <DeltaReadout d={z} direction={z.direction?.text} uncertainty={z.uncertainty} extra={<span className="font-medium">{verdictWords(z.dE00, batch.tolerance, z.uncertainty).text}</span>} />
             <InFrameLine inFrame={z.inFrame as never} />
-            <p className="num text-ink-soft">Batch {lab(z.lab)}{z.standard ? ` · standard ${lab(z.standard.lab)}` : ''}</p>
+            <p className="num text-ink-soft">Batch {lab(z.lab)}{z.regionUncertainty ? ` ± ${z.regionUncertainty.toFixed(2)} ΔE00` : ''}{z.standard ? ` · standard ${lab(z.standard.lab)}` : ''}</p>
             <LightLine light={z.whiteBalance as never} />
             <LightNote light={batch.light} />
           </div>

@@ -1,5 +1,6 @@
 'use client';
 
+import dynamic from 'next/dynamic';
 import { useSearchParams } from 'next/navigation';
 import { useEffect, useRef, useState } from 'react';
 import useSWR from 'swr';
@@ -9,12 +10,14 @@ import type { MatchDetail } from '@/db/queries/matchDetail';
 import { formatDeltaE, formatVolume } from '@/lib/format';
 import { swrFetcher } from '@/lib/http/client';
 import { decodeBatchPrefill, type VolumeUnit } from '@/lib/recipes';
-import { BatchForm } from './batch-form';
 import { BatchResult } from './batch-result';
 import { PassBadge } from './pass-badge';
 import { RunChart } from './run-chart';
 import { When } from '@/components/ui/when';
 import { FocusFirstField } from '@/components/match/match-sections';
+
+// The form (sampler, upload, schema checks) loads when it is opened, not with the page.
+const BatchForm = dynamic(() => import('./batch-form').then((m) => m.BatchForm), { loading: () => <p role="status" className="text-ink-soft">Loading the batch form…</p> });
 
 type Props = {
   match: MatchDetail;

@@ -8,7 +8,7 @@ import { FormError } from '@/components/ui/form-error';
 import type { MatchDetail } from '@/db/queries/matchDetail';
 import type { PourView } from '@/db/queries/pours';
 import { apiFetch, swrFetcher } from '@/lib/http/client';
-import { MAX_COMMENT } from '@/lib/validations/production';
+import { MAX_COMMENT } from '@/lib/validations/limits';
 import { SignOffHistory } from './signoff-history';
 
 type Props = { match: MatchDetail; pourId: string; canSubmit: boolean; canDecide: boolean };

@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { useStore } from 'zustand';
 import type { Shape } from '@/lib/color/types';
 import { formatLab } from '@/lib/format';
@@ -32,7 +32,6 @@ export function PhotoSampler({ src, width, height, zones, initialShapes, withNeu
   const surface = useRef<SVGSVGElement>(null);
   const [drag, setDrag] = useState<{ from: [number, number]; to: [number, number] } | null>(null);
   const panFrom = useRef<{ x: number; y: number } | null>(null);
-  const previews = useLivePreview(src, s.shapes);
   const stage = useRef<HTMLDivElement>(null);
   const photo = useRef<HTMLImageElement>(null);
   const gestures = useZoomGestures(stage, store);
@@ -82,7 +81,11 @@ export function PhotoSampler({ src, width, height, zones, initialShapes, withNeu
     }
     setDrag(null);
   };
-  const dragShape = drag && (s.tool === 'rect' || s.tool === 'ellipse') ? shapeFromDrag(s.tool, drag.from, drag.to) : null;
+  const dragShape = useMemo(() => (drag && (s.tool === 'rect' || s.tool === 'ellipse') ? shapeFromDrag(s.tool, drag.from, drag.to) : null), [drag, s.tool]);
+  // The preview follows the shape while it is dragged, so a region that reaches into another colour
+  // is flagged before the pointer is let go.
+  const liveShapes = useMemo(() => (dragShape ? { ...s.shapes, [s.selected]: dragShape } : s.shapes), [dragShape, s.shapes, s.selected]);
+  const previews = useLivePreview(src, liveShapes);
   const labelOf = (zone: string) => (zone === NEUTRAL ? 'grey card' : zone);
   // Keyboard drawing: Enter places a region for the selected zone, arrows move
   // it, Shift+arrows resize it (Alt for fine steps); each change is announced.
@@ -143,7 +146,7 @@ export function PhotoSampler({ src, width, height, zones, initialShapes, withNeu
               const [x, y] = shapeLabelPoint(shape);
               return (
                 <span key={zone} className="pointer-events-none absolute -translate-y-full rounded-sm bg-black/70 px-1 text-xs text-white" style={{ left: `${x * 100}%`, top: `${y * 100}%` }}>
-                  {labelOf(zone)}
+                  {labelOf(zone)}{previews[zone]?.other ? ' ▲ two colours' : ''}
                 </span>
               );
             })}
@@ -163,6 +166,11 @@ export function PhotoSampler({ src, width, height, zones, initialShapes, withNeu
                 <span className="num block text-ink-soft">
                   {p ? `preview ${formatLab(p.lab)}` : 'not marked yet'}
                 </span>
+                {p?.other ? (
+                  <span role="status" className="block font-medium text-band-off" data-testid={`other-warning-${zone}`}>
+                    <span aria-hidden>▲ </span>This region reaches into another colour (about {Math.round(p.other.share * 100)} % of it): draw it inside one colour.
+                  </span>
+                ) : null}
               </span>
             </li>
           );

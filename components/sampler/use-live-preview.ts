@@ -1,22 +1,21 @@
 'use client';
 
-import { converter, formatHex } from 'culori';
 import { useEffect, useRef, useState } from 'react';
-import { shapeSpans } from '@/lib/color/shapeSpans';
-import type { Lab, Shape } from '@/lib/color/types';
+import type { Shape } from '@/lib/color/types';
+import { type Preview, previewRegion } from './preview-region';
 
-const toLab = converter('lab65');
+export type { Preview };
+
 const PREVIEW_WIDTH = 640;
-const MAX_SAMPLES = 6000;
 
-export type Preview = { lab: Lab; hex: string; pixels: number };
-
-// A quick estimate while drawing, in the browser: the per-channel median in
-// CIELAB (culori lab65) of a subsample of the shape's pixels on a downscaled
-// copy of the photo. The server's measure (flake and glare left out, full
-// resolution, white balance) is the one that counts and is saved.
+// A quick reading while drawing, in the browser: the server's region measure on a downscaled
+// copy of the photo (preview-region.ts), for each zone's shape, including the one being dragged.
+// Shapes that did not change keep their reading; work is done at most once per animation frame.
+// The server's measure (full resolution, the photo's own colour space, the grey card) is the one
+// that counts and is saved.
 export function useLivePreview(src: string, shapes: Record<string, Shape>) {
-  const canvas = useRef<HTMLCanvasElement | null>(null);
+  const pixels = useRef<{ data: Uint8ClampedArray; width: number; height: number } | null>(null);
+  const cache = useRef(new Map<string, { key: string; preview: Preview | null }>());
   const [ready, setReady] = useState(false);
   const [previews, setPreviews] = useState<Record<string, Preview>>({});
 
@@ -27,47 +26,47 @@ export function useLivePreview(src: string, shapes: Record<string, Shape>) {
       const c = document.createElement('canvas');
       c.width = Math.max(1, Math.round(img.naturalWidth * scale));
       c.height = Math.max(1, Math.round(img.naturalHeight * scale));
-      c.getContext('2d', { willReadFrequently: true })?.drawImage(img, 0, 0, c.width, c.height);
-      canvas.current = c;
+      const ctx = c.getContext('2d', { willReadFrequently: true });
+      if (!ctx) return;
+      ctx.drawImage(img, 0, 0, c.width, c.height);
+      pixels.current = { data: ctx.getImageData(0, 0, c.width, c.height).data, width: c.width, height: c.height };
+      cache.current.clear();
       setReady(true);
     };
     img.src = src;
   }, [src]);
 
   useEffect(() => {
-    const c = canvas.current;
-    if (!ready || !c) return;
-    const ctx = c.getContext('2d', { willReadFrequently: true });
-    if (!ctx) return;
-    const data = ctx.getImageData(0, 0, c.width, c.height).data;
-    const next: Record<string, Preview> = {};
-    for (const [zone, shape] of Object.entries(shapes)) {
-      const spans = shapeSpans(shape, c.width, c.height);
-      let n = 0;
-      for (let i = 0; i < spans.length; i += 3) n += spans[i + 2]! - spans[i + 1]!;
-      if (n === 0) continue;
-      const step = Math.max(1, Math.ceil(n / MAX_SAMPLES));
-      const ls: number[] = [];
-      const as: number[] = [];
-      const bs: number[] = [];
-      let k = 0;
-      for (let i = 0; i < spans.length; i += 3) {
-        const y = spans[i]!;
-        for (let x = spans[i + 1]!; x < spans[i + 2]!; x++, k++) {
-          if (k % step) continue;
-          const o = (y * c.width + x) * 4;
-          const lab = toLab({ mode: 'rgb', r: data[o]! / 255, g: data[o + 1]! / 255, b: data[o + 2]! / 255 });
-          ls.push(lab.l);
-          as.push(lab.a);
-          bs.push(lab.b);
+    const px = pixels.current;
+    if (!ready || !px) return;
+    const frame = requestAnimationFrame(() => {
+      const next: Record<string, Preview> = {};
+      for (const [zone, shape] of Object.entries(shapes)) {
+        const key = JSON.stringify(shape);
+        let hit = cache.current.get(zone);
+        if (!hit || hit.key !== key) {
+          hit = { key, preview: safePreview(px, shape) };
+          cache.current.set(zone, hit);
         }
+        if (hit.preview) next[zone] = hit.preview;
       }
-      const med = (v: number[]) => v.sort((p, q) => p - q)[v.length >> 1]!;
-      const lab = { l: med(ls), a: med(as), b: med(bs) };
-      next[zone] = { lab, hex: formatHex({ mode: 'lab65', ...lab }), pixels: n };
-    }
-    setPreviews(next);
+      // A new object only when a reading changed, so an unchanged frame costs no render.
+      setPreviews((prev) => {
+        const same = Object.keys(next).length === Object.keys(prev).length && Object.entries(next).every(([z, p]) => prev[z] === p);
+        return same ? prev : next;
+      });
+    });
+    return () => cancelAnimationFrame(frame);
   }, [ready, shapes]);
 
   return previews;
+}
+
+// A preview is a help, never a blocker: if it cannot be worked out, the zone shows none.
+function safePreview(px: { data: Uint8ClampedArray; width: number; height: number }, shape: Shape): Preview | null {
+  try {
+    return previewRegion(px.data, px.width, px.height, shape);
+  } catch {
+    return null;
+  }
 }

@@ -8,7 +8,8 @@ import { getMatch, type MatchView } from './matches';
 
 export type TargetPhoto = { photoId: string; width: number; height: number; zones: { name: string; shape: Shape; lab: { l: number; a: number; b: number }; hex: string }[] };
 export type TargetDetail = {
-  zones: { name: string; lab: { l: number; a: number; b: number }; hex: string; spread: number | null; flakeCoverage: number | null }[];
+  /** `uncertainty`: the ± (ΔE00, about 95 %) of the target colour, the mean of its reference photos' (as addPour uses it). */
+  zones: { name: string; lab: { l: number; a: number; b: number }; hex: string; spread: number | null; flakeCoverage: number | null; uncertainty: number | null }[];
   photos: TargetPhoto[];
 };
 export type DraftPhoto = { photoId: string; width: number; height: number };
@@ -37,8 +38,12 @@ export function getMatchDetail(database: DB, teamId: string, matchId: string): M
     const zs = rows.filter((r) => r.s.zone === zone).map((r) => (r.s.flake as { coverage: number }).coverage);
     return zs.length ? zs.reduce((a, b) => a + b, 0) / zs.length : null;
   };
+  const uncertaintyOf = (zone: string) => {
+    const us = rows.filter((r) => r.s.zone === zone && r.s.uncertainty !== null).map((r) => r.s.uncertainty!);
+    return us.length ? us.reduce((a, b) => a + b, 0) / us.length : null;
+  };
   const target = match.target
-    ? { zones: match.target.zones.map((z) => ({ ...z, flakeCoverage: flakeOf(z.name) })), photos: targetPhotos }
+    ? { zones: match.target.zones.map((z) => ({ ...z, flakeCoverage: flakeOf(z.name), uncertainty: uncertaintyOf(z.name) })), photos: targetPhotos }
     : null;
   // A reference photo uploaded but not yet measured (kept across reloads).
   const draft =

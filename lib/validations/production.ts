@@ -1,12 +1,10 @@
 import { z } from 'zod';
 import { comparedZonesSchema, idField, neutralSchema, zoneName } from './match';
 
-// Sign-off and production batches (issue #6). The ceilings are sanity limits
-// against typing slips, not shop limits: 400 cups is 25 gallons of plastisol.
+import { MAX_BAITS, MAX_BATCH_CUPS, MAX_COMMENT } from './limits';
 
-export const MAX_COMMENT = 2000;
-export const MAX_BATCH_CUPS = 400;
-export const MAX_BAITS = 100_000;
+// Sign-off and production batches (issue #6); the ceilings live in ./limits.
+export { MAX_BAITS, MAX_BATCH_CUPS, MAX_COMMENT };
 
 const comment = (name: string) =>
   z

@@ -73,7 +73,7 @@ describe.runIf(browserAvailable())('browser: a whole match on the bench', () => 
     const figures = await page.getByRole('region', { name: 'Pour #2 against the target' }).textContent();
     expect(figures).toMatch(/ΔE00/);
     expect(figures).toMatch(/ΔL\*/);
-    await page.getByRole('figure', { name: 'ΔE00 per zone across pours' }).locator('svg.recharts-surface').first().waitFor();
+    await page.getByRole('figure', { name: 'ΔE00 per zone across pours' }).locator('svg[data-chart]').first().waitFor();
     expect(await page.getByRole('list', { name: 'Pours' }).getByRole('button').count()).toBe(2);
     await page.screenshot({ path: artifactPath('match-bench-1280.png'), fullPage: true });
     await page.setViewportSize({ width: 390, height: 844 });
