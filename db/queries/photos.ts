@@ -1,5 +1,6 @@
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import type { DB } from '../open';
+import { type PageOf, type PageRequest, afterCursor, cutPage } from './paging';
 import { type NewPhoto, type PhotoKind, matches, photos, samples } from '../schema';
 
 // What the API shows of a photo: never its storage key.
@@ -41,7 +42,18 @@ export type PhotoListItem = PhotoView & { match: PhotoMatchLink | null };
 // The team's recent photos, each with the match it belongs to: the one it was
 // measured for (target, pour or batch), or the one holding it as a draft reference.
 export function listPhotos(database: DB, teamId: string, limit = 48): PhotoListItem[] {
-  const rows = database.select(publicColumns).from(photos).where(eq(photos.teamId, teamId)).orderBy(desc(photos.createdAt)).limit(limit).all();
+  return pagePhotos(database, teamId, { limit, cursor: null }).items;
+}
+
+// One page of them, newest first (keyset on createdAt, id: photos_team_created_idx).
+export function pagePhotos(database: DB, teamId: string, page: PageRequest): PageOf<PhotoListItem> {
+  const rows = database.select(publicColumns).from(photos)
+    .where(and(eq(photos.teamId, teamId), afterCursor(photos.createdAt, photos.id, page.cursor, 'desc')))
+    .orderBy(desc(photos.createdAt), desc(photos.id)).limit(page.limit + 1).all();
+  return cutPage(rows, page.limit, (r) => ({ at: r.createdAt, id: r.id }), (kept) => withMatchLinks(database, teamId, kept));
+}
+
+function withMatchLinks(database: DB, teamId: string, rows: PhotoView[]): PhotoListItem[] {
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.id);
   const links = new Map<string, PhotoMatchLink>();

@@ -1,0 +1,98 @@
+import { gt } from 'drizzle-orm';
+import { drizzle } from 'drizzle-orm/better-sqlite3';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { LARGE_SHOP, type LargeShop, seedLargeShop } from '../../bench/seed-large-shop';
+import { getBatch, listBatches, pageMatchBatches, pageRecentBatches } from '../../db/queries/batches';
+import { colorHistoryKeysSince, colorHistoryStamp, loadColorHistory, loadFlakeHistory, loadMatchHistory, targetFlakeCoverage } from '../../db/queries/colorHistory';
+import { matchHistory } from '../../db/queries/history';
+import { getMatchDetail } from '../../db/queries/matchDetail';
+import { getMatch, listMatches, pageMatches } from '../../db/queries/matches';
+import type { DB } from '../../db/open';
+import { pagePhotos } from '../../db/queries/photos';
+import { pagePourSummaries } from '../../db/queries/pourHistory';
+import { getPour } from '../../db/queries/pours';
+import { listSignOffQueue } from '../../db/queries/signOffQueue';
+import { listStandards } from '../../db/queries/standards';
+import * as schema from '../../db/schema';
+import { freshDb } from '../support/db';
+
+// Tables that grow with the shop's work: a full SCAN of one of them (with or without an
+// index to walk in order) reads every team's rows to answer about one match or one page.
+const BIG = ['matches', 'zones', 'pours', 'recipe_lines', 'samples', 'photos', 'batches', 'sign_offs', 'audit_events', 'stock_movements', 'swatches'];
+
+type Query = { sql: string; params: unknown[] };
+
+describe('query plans of the hot reads on a large shop (EXPLAIN QUERY PLAN)', () => {
+  const { database, cleanup } = freshDb();
+  const seen: Query[] = [];
+  // The same connection, with a logger that keeps every statement the queries run.
+  const logged = drizzle(database.$client, { schema, logger: { logQuery: (sql, params) => seen.push({ sql, params }) } }) as unknown as DB;
+  let shop: LargeShop;
+  beforeAll(async () => {
+    shop = await seedLargeShop(database, { matches: 40, pours: 800 });
+  }, 60_000);
+  afterAll(cleanup);
+
+  // Runs `read`, then the plan of every statement it sent; returns the plans' lines.
+  function plansOf(read: (d: DB) => unknown): { sql: string; plan: string[] }[] {
+    seen.length = 0;
+    read(logged);
+    expect(seen.length, 'the read sent no statement').toBeGreaterThan(0);
+    return seen.map(({ sql, params }) => ({
+      sql,
+      plan: database.$client.prepare(`explain query plan ${sql}`).all(...(params as unknown[])).map((r) => (r as { detail: string }).detail),
+    }));
+  }
+
+  // A full SCAN of a big table; for a read about one match, pour or batch (`scoped`), also a
+  // big table reached by the team alone (every row of the shop's, filtered afterwards).
+  function badSteps(read: (d: DB) => unknown, scoped: boolean): string[] {
+    const bad = (line: string) => {
+      const scan = line.match(/^SCAN (\w+)/);
+      if (scan) return BIG.includes(scan[1]!);
+      const byTeam = line.match(/^SEARCH (\w+) USING (?:COVERING )?INDEX \w+ \(team_id=\?\)$/);
+      return scoped && !!byTeam && BIG.includes(byTeam[1]!);
+    };
+    return plansOf(read).flatMap(({ sql, plan }) => plan.filter(bad).map((line) => `${line}\n    in: ${sql}`));
+  }
+
+  const team = () => shop.teamId;
+  const approved = () => getMatch(database, team(), shop.matchIds[4]!)!; // every fourth match is approved with batches
+  // [what, the read, whether it is about one match, pour or batch]
+  const cases: [string, (d: DB) => unknown, boolean][] = [
+    ['a match by id with its pours (GET /api/matches/:id)', (d) => getMatchDetail(d, team(), shop.matchIds[7]!), true],
+    ['listMatches, no filter', (d) => listMatches(d, team()), false],
+    ['listMatches by status and search', (d) => listMatches(d, team(), { status: 'open', q: 'craw' }), false],
+    ['a page of matches after a cursor, filtered', (d) => pageMatches(d, team(), { status: 'approved' }, { limit: 10, cursor: { at: Date.now(), id: 'zzzz' } }), false],
+    ['a page of a match\'s pours', (d) => pagePourSummaries(d, team(), shop.matchIds[7]!, { limit: 10, cursor: { at: 12, id: 'x' } }), true],
+    ['a pour', (d) => getPour(d, team(), approved().pours[0]!.id), true],
+    ['the batches of a standard', (d) => listBatches(d, team(), approved().id), true],
+    ['a page of a standard\'s batches', (d) => pageMatchBatches(d, team(), approved().id, { limit: 5, cursor: { at: 0, id: '' } }), true],
+    ['a page of the team\'s recent batches', (d) => pageRecentBatches(d, team(), { limit: 20, cursor: { at: Date.now(), id: 'zzzz' } }), false],
+    ['a batch', (d) => getBatch(d, team(), pageRecentBatches(database, team(), { limit: 1, cursor: null }).items[0]!.id), true],
+    ['a page of the team\'s photos', (d) => pagePhotos(d, team(), { limit: 48, cursor: { at: Date.now(), id: 'zzzz' } }), false],
+    ['a match\'s sign-off history', (d) => matchHistory(d, team(), approved().id), true],
+    ['the dose history of a match (next-pour hint)', (d) => loadMatchHistory(d, team(), shop.matchIds[7]!, 10), true],
+    ['the shop\'s colour history and its fingerprint', (d) => [colorHistoryStamp(d, team()), loadColorHistory(d, team()), colorHistoryKeysSince(d, team(), Date.now() - 86400_000)], false],
+    ['the flake history and a target\'s flake coverage', (d) => [loadFlakeHistory(d, team()), targetFlakeCoverage(d, team(), shop.matchIds[7]!)], false],
+    ['the standards and the sign-off queue', (d) => [listStandards(d, team()), listSignOffQueue(d, team())], false],
+  ];
+
+  for (const [name, read, scoped] of cases) {
+    it(`${name}: no full scan of a big table${scoped ? ', none read by the team alone' : ''}`, () => {
+      if (process.env.SHOW_PLANS) for (const p of plansOf(read)) console.log(`${p.plan.join("\n")}\n    in: ${p.sql.slice(0, 300)}\n`);
+      expect(badSteps(read, scoped)).toEqual([]);
+    });
+  }
+
+  it('catches a full scan when there is one (the check can fail)', () => {
+    const scans = badSteps((d) => d.select().from(schema.samples).where(gt(schema.samples.l, 50)).all(), false);
+    expect(scans.length).toBe(1);
+    expect(scans[0]).toMatch(/^SCAN samples/);
+  });
+
+  it('the seeded shop is the size asked for, with invented names', () => {
+    expect(database.$client.prepare('select count(*) as n from pours where team_id = ?').get(team())).toEqual({ n: 800 });
+    expect(LARGE_SHOP.maker).toMatch(/\.test$/);
+  });
+});
