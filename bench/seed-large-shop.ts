@@ -52,7 +52,8 @@ function rng(seed: number) {
 const sampleCommon = { shape: { type: 'rect', x: 0.2, y: 0.3, w: 0.2, h: 0.1 }, pixels: 4000, kept: 3600, spread: 0.8, glare: 0.01, flake: { coverage: 0, groups: [] }, uncertainty: 0.6 };
 
 /** Writes the large shop into `database` (migrated) and returns its team id and match ids. */
-export async function seedLargeShop(database: DB, opts: { matches?: number; pours?: number } = {}): Promise<LargeShop> {
+// `emailTag` writes a second shop beside the first (its people's e-mail addresses start with it).
+export async function seedLargeShop(database: DB, opts: { matches?: number; pours?: number; emailTag?: string } = {}): Promise<LargeShop> {
   const matchCount = opts.matches ?? 200;
   const pourCount = opts.pours ?? 5000;
   const passwordHash = await hashPassword(LARGE_SHOP.password);
@@ -64,11 +65,11 @@ export async function seedLargeShop(database: DB, opts: { matches?: number; pour
   let poured = 0;
   const start = Date.now() - 365 * 86400_000;
   database.transaction((tx) => {
-    tx.insert(teams).values({ id: teamId, name: LARGE_SHOP.team }).run();
+    tx.insert(teams).values({ id: teamId, name: opts.emailTag ? `${LARGE_SHOP.team} (${opts.emailTag})` : LARGE_SHOP.team }).run();
     const people: Record<string, string> = {};
     for (const p of PEOPLE) {
       people[p.role] = newId();
-      tx.insert(users).values({ id: people[p.role]!, email: p.email, name: p.name, passwordHash }).run();
+      tx.insert(users).values({ id: people[p.role]!, email: opts.emailTag ? `${opts.emailTag}-${p.email}` : p.email, name: p.name, passwordHash }).run();
       tx.insert(memberships).values({ id: newId(), teamId, userId: people[p.role]!, role: p.role }).run();
     }
     const colorantIds = COLORANTS.map(([name, kind, unit]) => {

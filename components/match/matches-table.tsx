@@ -5,13 +5,12 @@ import {
   type SortingState,
   flexRender,
   getCoreRowModel,
-  getFilteredRowModel,
   getSortedRowModel,
   useReactTable,
 } from '@tanstack/react-table';
 import Link from 'next/link';
 import { When } from '@/components/ui/when';
-import { useMemo, useState } from 'react';
+import { useState } from 'react';
 import { BandBadge } from '@/components/color/band-badge';
 import { inputClass } from '@/components/ui/field';
 import type { MatchView } from '@/db/queries/matches';
@@ -35,7 +34,7 @@ const columns: ColumnDef<MatchView>[] = [
     header: 'Match',
     cell: ({ row }) => <Link href={`/matches/${row.original.id}`} className="font-medium text-accent underline-offset-2 hover:underline">{row.original.name}</Link>,
   },
-  { accessorKey: 'status', header: 'Status', cell: ({ getValue }) => <StatusBadge status={getValue<string>()} />, filterFn: 'equalsString' },
+  { accessorKey: 'status', header: 'Status', cell: ({ getValue }) => <StatusBadge status={getValue<string>()} /> },
   { id: 'zones', header: 'Zones', accessorFn: (m) => m.zones.join(', '), enableSorting: false, meta: { wide: true } },
   { id: 'pours', header: 'Pours', accessorFn: (m) => m.pours.length, meta: { num: true, wide: true } },
   {
@@ -70,71 +69,71 @@ function cellClass(id: string, meta: unknown): string {
   return id === 'name' ? 'sticky left-0 z-10 bg-inherit' : '';
 }
 
+// The search and status filter: the server filters (GET /api/matches?q&status).
+export function MatchesFilters({ search, onSearch, status, onStatus }: { search: string; onSearch: (v: string) => void; status: string; onStatus: (v: string) => void }) {
+  return (
+    <div className="mb-3 flex flex-wrap gap-3">
+      <label className="min-w-48 flex-1">
+        <span className="sr-only">Search matches</span>
+        <input type="search" placeholder="Search by name or notes" value={search} onChange={(e) => onSearch(e.target.value)} className={inputClass} />
+      </label>
+      <label className="w-44">
+        <span className="sr-only">Status</span>
+        <select value={status} onChange={(e) => onStatus(e.target.value)} className={inputClass} aria-label="Filter by status">
+          <option value="">All statuses</option>
+          {MATCH_STATUSES.map((s) => <option key={s} value={s}>{s.replace('_', ' ')}</option>)}
+        </select>
+      </label>
+    </div>
+  );
+}
+
+// The loaded matches, sorted in the browser by the column a maker picks.
 export function MatchesTable({ data }: { data: MatchView[] }) {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'activity', desc: true }]);
-  const [search, setSearch] = useState('');
-  const [status, setStatus] = useState('');
-  const columnFilters = useMemo(() => (status ? [{ id: 'status', value: status }] : []), [status]);
   const table = useReactTable({
     data,
     columns,
-    state: { sorting, globalFilter: search, columnFilters },
+    state: { sorting },
     onSortingChange: setSorting,
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    globalFilterFn: (row, _id, value: string) => row.original.name.toLowerCase().includes(value.toLowerCase()) || (row.original.notes ?? '').toLowerCase().includes(value.toLowerCase()),
   });
   return (
-    <div>
-      <div className="mb-3 flex flex-wrap gap-3">
-        <label className="min-w-48 flex-1">
-          <span className="sr-only">Search matches</span>
-          <input type="search" placeholder="Search by name or notes" value={search} onChange={(e) => setSearch(e.target.value)} className={inputClass} />
-        </label>
-        <label className="w-44">
-          <span className="sr-only">Status</span>
-          <select value={status} onChange={(e) => setStatus(e.target.value)} className={inputClass} aria-label="Filter by status">
-            <option value="">All statuses</option>
-            {MATCH_STATUSES.map((s) => <option key={s} value={s}>{s.replace('_', ' ')}</option>)}
-          </select>
-        </label>
-      </div>
-      <div className="overflow-x-auto rounded-lg border border-panel-line bg-white">
-        <table className="w-full text-left text-sm" aria-label="Matches">
-          <thead className="bg-panel-deep [&_tr]:bg-panel-deep">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} className={`p-0 ${cellClass(h.column.id, h.column.columnDef.meta)}`} aria-sort={sorted ? SORT_ARIA[sorted] : undefined}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="flex min-h-tap w-full items-center gap-1 p-3 text-left font-semibold">
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden className="text-ink-soft">{sorted ? SORT_MARK[sorted] : '↕'}</span>
-                        </button>
-                      ) : (
-                        <span className="block p-3 font-semibold">{flexRender(h.column.columnDef.header, h.getContext())}</span>
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-t border-panel-line bg-white align-top">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className={`p-3 ${cellClass(cell.column.id, cell.column.columnDef.meta)}`}>{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-        {table.getRowModel().rows.length === 0 ? <p className="p-4 text-ink-soft">No match fits this search.</p> : null}
-      </div>
+    <div className="overflow-x-auto rounded-lg border border-panel-line bg-white">
+      <table className="w-full text-left text-sm" aria-label="Matches">
+        <thead className="bg-panel-deep [&_tr]:bg-panel-deep">
+          {table.getHeaderGroups().map((hg) => (
+            <tr key={hg.id}>
+              {hg.headers.map((h) => {
+                const sorted = h.column.getIsSorted();
+                return (
+                  <th key={h.id} className={`p-0 ${cellClass(h.column.id, h.column.columnDef.meta)}`} aria-sort={sorted ? SORT_ARIA[sorted] : undefined}>
+                    {h.column.getCanSort() ? (
+                      <button type="button" onClick={h.column.getToggleSortingHandler()} className="flex min-h-tap w-full items-center gap-1 p-3 text-left font-semibold">
+                        {flexRender(h.column.columnDef.header, h.getContext())}
+                        <span aria-hidden className="text-ink-soft">{sorted ? SORT_MARK[sorted] : '↕'}</span>
+                      </button>
+                    ) : (
+                      <span className="block p-3 font-semibold">{flexRender(h.column.columnDef.header, h.getContext())}</span>
+                    )}
+                  </th>
+                );
+              })}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) => (
+            <tr key={row.id} className="border-t border-panel-line bg-white align-top">
+              {row.getVisibleCells().map((cell) => (
+                <td key={cell.id} className={`p-3 ${cellClass(cell.column.id, cell.column.columnDef.meta)}`}>{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      {table.getRowModel().rows.length === 0 ? <p className="p-4 text-ink-soft">No match fits this search.</p> : null}
     </div>
   );
 }

@@ -30,6 +30,16 @@ export function readQuery<T extends z.ZodType>(req: Request, schema: T): z.infer
   return parsed.data;
 }
 
+/** A cursor from a page's address, or null (the first page) when it is not one of ours. */
+export function cursorOrNull(raw: string | string[] | undefined): Cursor | null {
+  if (typeof raw !== 'string' || !raw) return null;
+  try {
+    return decodeCursor(raw);
+  } catch {
+    return null;
+  }
+}
+
 /** The page asked for, or null when the caller asked for none (the route's old answer). */
 export function pageOf(query: { limit?: number; cursor?: string }): PageRequest | null {
   if (query.limit === undefined && query.cursor === undefined) return null;
