@@ -1,6 +1,6 @@
 import { type SQL, and, asc, desc, eq, inArray } from 'drizzle-orm';
 import { describeDifference, labToHex } from '../../lib/color';
-import { costOfBatch, defaultBase, getBase } from '../../lib/batches/batchMaterials';
+import { type StandardRecipe, costOfBatch, defaultBase, getBase, standardRecipe } from '../../lib/batches/batchMaterials';
 import { splitZoneCups } from '../../lib/recipes';
 import { sampleFigures } from './pours';
 import { batchMovements } from './stock';
@@ -38,6 +38,13 @@ function batchViews(database: DB, teamId: string, where: SQL | undefined, order:
   const moldIds = [...new Set(rows.flatMap((r) => [r.b.moldId, ...(r.b.plan ?? []).map((p) => p.moldId)]).filter((x): x is string => !!x))];
   const moldRows = moldIds.length ? database.select().from(molds).where(and(eq(molds.teamId, teamId), inArray(molds.id, moldIds))).all() : [];
   const fallbackBase = defaultBase(database, teamId);
+  // Each standard's recipe is read once for all its batches in the list.
+  const standards = new Map<string, StandardRecipe>();
+  const standardOf = (id: string) => {
+    let s = standards.get(id);
+    if (!s) standards.set(id, (s = standardRecipe(database, teamId, id)));
+    return s;
+  };
   return rows.map(({ b, by, mold, matchName, tolerance, stdNumber }) => {
     const order = zoneOrder.filter((z) => z.matchId === b.matchId).map((z) => z.name);
     const stdZoneNames = order.filter((z) => stdSamples.some((x) => x.pourId === b.standardPourId && x.zone === z));
@@ -53,7 +60,7 @@ function batchViews(database: DB, teamId: string, where: SQL | undefined, order:
     const base = b.baseColorantId ? getBase(database, teamId, b.baseColorantId) : fallbackBase;
     const cost = costOfBatch(database, teamId, {
       standardPourId: b.standardPourId, zoneCups, base, dropsPerMl: team.dropsPerMl, sprueAllowanceMl: team.sprueAllowanceMl,
-      molds: costMolds, baits: b.baitsActual ?? b.baitsExpected,
+      molds: costMolds, baits: b.baitsActual ?? b.baitsExpected, standard: standardOf(b.standardPourId),
     });
     const stock = moves.filter((m) => m.batchId === b.id).map(({ batchId: _b, ...m }) => m);
     const zs = batchSamples

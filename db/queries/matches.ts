@@ -2,6 +2,7 @@ import { type SQL, and, asc, desc, eq, inArray, or, sql } from 'drizzle-orm';
 import { labToHex } from '../../lib/color';
 import type { DB } from '../open';
 import { type MatchStatus, matches, pours, samples, users, zones } from '../schema';
+import { matchReads } from './matchReads';
 import { type PageOf, type PageRequest, afterCursor, cutPage } from './paging';
 
 export type LabValue = { l: number; a: number; b: number };
@@ -61,10 +62,24 @@ export function pageMatches(database: DB, teamId: string, filter: MatchFilter, p
   return cutPage(rows, page.limit, (r) => ({ at: r.m.updatedAt, id: r.m.id }), (kept) => matchViews(database, kept));
 }
 
+// One match, through the prepared reads of db/queries/matchReads.ts.
 export function getMatch(database: DB, teamId: string, matchId: string): MatchView | null {
-  const row = selectMatches(database, and(eq(matches.id, matchId), eq(matches.teamId, teamId))).get();
-  return row ? matchViews(database, [row])[0]! : null;
+  const reads = matchReads(database);
+  const args = { matchId, teamId };
+  const row = reads.match.get(args);
+  if (!row) return null;
+  return assemble([row], {
+    zonesOf: new Map([[matchId, reads.zones.all(args).map((r) => r.zones)]]),
+    poursOf: new Map([[matchId, reads.pours.all(args)]]),
+    samplesOf: groupBy(reads.pourSamples.all(args), (s) => s.pourId ?? ''),
+  })[0]!;
 }
+
+type Parts = {
+  zonesOf: Map<string, (typeof zones.$inferSelect)[]>;
+  poursOf: Map<string, { id: string; matchId: string; number: number; status: string; createdAt: number }[]>;
+  samplesOf: Map<string, { pourId: string | null; zone: string; dE00: number | null }[]>;
+};
 
 // Each match's zones, pours and the pours' ΔE00, read for just these matches and grouped by key.
 function matchViews(database: DB, rows: MatchRow[]): MatchView[] {
@@ -90,6 +105,10 @@ function matchViews(database: DB, rows: MatchRow[]): MatchView[] {
       .all(),
     (s) => s.pourId ?? '',
   );
+  return assemble(rows, { zonesOf, poursOf, samplesOf });
+}
+
+function assemble(rows: MatchRow[], { zonesOf, poursOf, samplesOf }: Parts): MatchView[] {
   return rows.map(({ m, creator }) => {
     const zs = zonesOf.get(m.id) ?? [];
     const hasTarget = zs.length > 0 && zs.every((z) => z.targetL !== null);
