@@ -16,7 +16,10 @@ async function signIn(base: string, email: string, password: string): Promise<st
   return res.headers.get('set-cookie')!.split(';')[0]!;
 }
 
+// Latency at a steady rate, after 2 s of the same requests unrecorded (the route's code loaded
+// and compiled, its statements prepared): the figure of a server that has been up a while.
 async function steady(label: string, url: string, cookie: string, seconds: number, rate = 100): Promise<SteadyRead> {
+  await run({ url, connections: 10, overallRate: rate, duration: 2, headers: { cookie } });
   const r = await run({ url, connections: 10, overallRate: rate, duration: seconds, headers: { cookie } });
   return { label, p50: r.latency.p50, p99: r.latency.p99, rps: r.requests.average, non2xx: r.non2xx };
 }
@@ -39,7 +42,7 @@ async function inTurns(routes: Record<string, autocannon.Options>, rounds: numbe
 /**
  * On one server: bare `GET /api/health`, `GET /api/me` (the session check alone) and
  * `POST /api/delta-e` flat out, in turns (5 rounds of 2 s each); then reads at a steady
- * 100 requests/s for their latency: a match of the demo shop and the match with the most
+ * 100 requests/s for their latency (each after a 2 s warm-up): a match of the demo shop and the match with the most
  * pours of the large shop (bench/seed-large-shop.ts); and the large shop's first page of
  * matches, batches and photos at 20 requests/s. The caller prints the ratios.
  */

@@ -47,7 +47,7 @@ async function serverFigures(root: string) {
   console.log(`  bare GET /api/health: ${r.healthRps.toFixed(0)} requests/s`);
   console.log(`  POST /api/delta-e / bare health: ${r.deltaRps.toFixed(0)} / ${r.healthRps.toFixed(0)} = ${(r.deltaRps / r.healthRps).toFixed(2)} (goal ≥ 0.7)`);
   console.log(`  GET /api/me (the session check alone) / bare health: ${r.meRps.toFixed(0)} / ${r.healthRps.toFixed(0)} = ${(r.meRps / r.healthRps).toFixed(2)} (goal ≥ 0.8)`);
-  console.log('  latency:');
+  console.log('  latency (each route warmed up for 2 s first):');
   for (const x of r.reads) {
     const goal = x.label.startsWith('GET /api/matches/:id') ? 'at a steady 100 requests/s; goal p99 ≤ 50 ms' : 'no goal set; for reference';
     console.log(`  ${x.label}: p50 ${x.p50} ms, p99 ${x.p99} ms (${goal}; ${x.non2xx} non-2xx)`);

@@ -184,7 +184,7 @@ export const matches = sqliteTable(
     // the match at once, so a reload or a walk away does not lose it.
     draftPhotoId: text('draft_photo_id').references(() => photos.id, { onDelete: 'set null' }),
   },
-  (t) => [index('matches_team_idx').on(t.teamId, t.updatedAt)],
+  (t) => [index('matches_team_idx').on(t.teamId, t.updatedAt), index('matches_draft_photo_idx').on(t.draftPhotoId)],
 );
 
 // A match's zones in order; the target colour is the mean of the zone's

@@ -78,7 +78,7 @@ function withMatchLinks(database: DB, teamId: string, rows: PhotoView[]): PhotoL
   const drafts = database
     .select({ photoId: matches.draftPhotoId, id: matches.id, name: matches.name, status: matches.status })
     .from(matches)
-    .where(and(eq(matches.teamId, teamId), inArray(matches.draftPhotoId, ids)))
+    .where(and(sql`+${matches.teamId} = ${teamId}`, inArray(matches.draftPhotoId, ids)))
     .all();
   for (const d of drafts) if (d.photoId && !links.has(d.photoId)) links.set(d.photoId, { id: d.id, name: d.name, status: d.status, use: 'draft' });
   return rows.map((r) => ({ ...r, match: links.get(r.id) ?? null }));

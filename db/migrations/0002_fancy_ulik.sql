@@ -3,6 +3,7 @@ DROP INDEX `batches_team_idx`;--> statement-breakpoint
 CREATE INDEX `batches_match_idx` ON `batches` (`match_id`,`team_id`,`created_at`);--> statement-breakpoint
 CREATE INDEX `batches_team_idx` ON `batches` (`team_id`,`created_at`);--> statement-breakpoint
 DROP INDEX `matches_team_idx`;--> statement-breakpoint
+CREATE INDEX `matches_draft_photo_idx` ON `matches` (`draft_photo_id`);--> statement-breakpoint
 CREATE INDEX `matches_team_idx` ON `matches` (`team_id`,`updated_at`);--> statement-breakpoint
 DROP INDEX `photos_team_idx`;--> statement-breakpoint
 CREATE INDEX `photos_team_idx` ON `photos` (`team_id`,`created_at`);--> statement-breakpoint
