@@ -5,10 +5,11 @@ import path from 'node:path';
 import autocannon from 'autocannon';
 import { openDatabase } from '../db/open';
 import { seedDemo } from '../scripts/seed/seed-demo';
+import { seedLargeShop, type LargeShop } from './seed-large-shop';
 import { healthUnderMeasure, type HealthUnderMeasure } from './health-under-measure';
 import { type ReadLoad, runReadLoad } from './read-load';
 
-export type LoadResult = { reads: ReadLoad; health: HealthUnderMeasure; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
+export type LoadResult = { large: LargeShop; reads: ReadLoad; health: HealthUnderMeasure; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
 
 // POST /api/delta-e under load against `next start` (production build in
 // .next, built by the caller), 10 s with 32 connections, as a signed-in member.
@@ -17,6 +18,7 @@ export async function runDeltaELoad(root: string, port = 3199, seconds = 10): Pr
   const dbFile = path.join(tmp, 'bench.db');
   const database = openDatabase(dbFile, { migrate: true });
   await seedDemo(database);
+  const large = await seedLargeShop(database);
   database.$client.close();
   const base = `http://127.0.0.1:${port}`;
   const child: ChildProcess = spawn(process.execPath, [path.join(root, 'node_modules/next/dist/bin/next'), 'start', '-p', String(port), '-H', '127.0.0.1'], {
@@ -48,6 +50,7 @@ export async function runDeltaELoad(root: string, port = 3199, seconds = 10): Pr
     const refusals = await timeRefusals(base, cookie);
     const health = await healthUnderMeasure(base);
     return {
+      large,
       reads,
       health,
       refusals,

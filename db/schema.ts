@@ -162,7 +162,7 @@ export const photos = sqliteTable(
     uploadedBy: text('uploaded_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: integer('created_at').notNull().default(now),
   },
-  (t) => [index('photos_team_idx').on(t.teamId)],
+  (t) => [index('photos_team_idx').on(t.teamId, t.createdAt)],
 );
 
 export const matches = sqliteTable(
@@ -184,7 +184,7 @@ export const matches = sqliteTable(
     // the match at once, so a reload or a walk away does not lose it.
     draftPhotoId: text('draft_photo_id').references(() => photos.id, { onDelete: 'set null' }),
   },
-  (t) => [index('matches_team_idx').on(t.teamId)],
+  (t) => [index('matches_team_idx').on(t.teamId, t.updatedAt), index('matches_draft_photo_idx').on(t.draftPhotoId)],
 );
 
 // A match's zones in order; the target colour is the mean of the zone's
@@ -225,7 +225,12 @@ export const pours = sqliteTable(
     submittedAt: integer('submitted_at'),
     submittedBy: text('submitted_by').references(() => users.id, { onDelete: 'set null' }),
   },
-  (t) => [uniqueIndex('pours_match_number').on(t.matchId, t.number), index('pours_team_idx').on(t.teamId)],
+  (t) => [
+    uniqueIndex('pours_match_number').on(t.matchId, t.number),
+    index('pours_team_idx').on(t.teamId, t.createdAt),
+    // The sign-off queue: only the pours waiting for a lead.
+    index('pours_submitted_idx').on(t.teamId, t.submittedAt).where(sql`${t.status} = 'submitted'`),
+  ],
 );
 
 // Doses are normalised per cup of plastisol.
@@ -265,7 +270,7 @@ export const batches = sqliteTable(
     createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: integer('created_at').notNull().default(now),
   },
-  (t) => [index('batches_match_idx').on(t.matchId), index('batches_team_idx').on(t.teamId)],
+  (t) => [index('batches_match_idx').on(t.matchId, t.teamId, t.createdAt), index('batches_team_idx').on(t.teamId, t.createdAt)],
 );
 
 // One measured region of a photo: a zone of a target, pour or batch, or a
@@ -310,9 +315,12 @@ export const samples = sqliteTable(
     createdAt: integer('created_at').notNull().default(now),
   },
   (t) => [
-    index('samples_match_idx').on(t.matchId),
+    index('samples_match_idx').on(t.matchId, t.purpose),
     index('samples_pour_idx').on(t.pourId),
     index('samples_batch_idx').on(t.batchId),
+    // The shop's colour history (pour and swatch samples of a team) and a photo's uses.
+    index('samples_team_purpose_idx').on(t.teamId, t.purpose),
+    index('samples_photo_idx').on(t.photoId),
   ],
 );
 
@@ -347,7 +355,7 @@ export const signOffs = sqliteTable(
     decidedBy: text('decided_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: integer('created_at').notNull().default(now),
   },
-  (t) => [index('sign_offs_match_idx').on(t.matchId)],
+  (t) => [index('sign_offs_match_idx').on(t.matchId), index('sign_offs_pour_idx').on(t.pourId)],
 );
 
 
@@ -369,7 +377,7 @@ export const stockMovements = sqliteTable(
     createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: integer('created_at').notNull().default(now),
   },
-  (t) => [index('stock_movements_colorant_idx').on(t.colorantId, t.createdAt), index('stock_movements_team_idx').on(t.teamId)],
+  (t) => [index('stock_movements_colorant_idx').on(t.colorantId, t.createdAt), index('stock_movements_team_idx').on(t.teamId, t.batchId)],
 );
 
 export const auditEvents = sqliteTable(
@@ -384,7 +392,7 @@ export const auditEvents = sqliteTable(
     data: text('data', { mode: 'json' }),
     createdAt: integer('created_at').notNull().default(now),
   },
-  (t) => [index('audit_events_team_idx').on(t.teamId, t.createdAt)],
+  (t) => [index('audit_events_team_idx').on(t.teamId, t.createdAt), index('audit_events_entity_idx').on(t.teamId, t.entityId)],
 );
 
 export const outgoingMail = sqliteTable(

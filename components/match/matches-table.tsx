@@ -1,8 +1,16 @@
 'use client';
 
+import {
+  type ColumnDef,
+  type SortingState,
+  flexRender,
+  getCoreRowModel,
+  getSortedRowModel,
+  useReactTable,
+} from '@tanstack/react-table';
 import Link from 'next/link';
 import { When } from '@/components/ui/when';
-import { type ReactNode, useMemo, useState } from 'react';
+import { useState } from 'react';
 import { BandBadge } from '@/components/color/band-badge';
 import { inputClass } from '@/components/ui/field';
 import type { MatchView } from '@/db/queries/matches';
@@ -20,25 +28,21 @@ const worstDelta = (m: MatchView) => {
   return zs.length ? Math.max(...zs.map((z) => z.dE00!)) : Number.POSITIVE_INFINITY;
 };
 
-// Each column: how it sorts (none for Zones) and how its cell reads. Text sorts A→Z first,
-// figures and dates highest first; a third press on a header drops the sort.
-type Column = { id: string; header: string; sort?: (m: MatchView) => string | number; cell: (m: MatchView) => ReactNode; wide?: boolean };
-const columns: Column[] = [
+const columns: ColumnDef<MatchView>[] = [
   {
-    id: 'name',
+    accessorKey: 'name',
     header: 'Match',
-    sort: (m) => m.name.toLowerCase(),
-    cell: (m) => <Link href={`/matches/${m.id}`} className="font-medium text-accent underline-offset-2 hover:underline">{m.name}</Link>,
+    cell: ({ row }) => <Link href={`/matches/${row.original.id}`} className="font-medium text-accent underline-offset-2 hover:underline">{row.original.name}</Link>,
   },
-  { id: 'status', header: 'Status', sort: (m) => m.status, cell: (m) => <StatusBadge status={m.status} /> },
-  { id: 'zones', header: 'Zones', cell: (m) => m.zones.join(', '), wide: true },
-  { id: 'pours', header: 'Pours', sort: (m) => m.pours.length, cell: (m) => m.pours.length, wide: true },
+  { accessorKey: 'status', header: 'Status', cell: ({ getValue }) => <StatusBadge status={getValue<string>()} /> },
+  { id: 'zones', header: 'Zones', accessorFn: (m) => m.zones.join(', '), enableSorting: false, meta: { wide: true } },
+  { id: 'pours', header: 'Pours', accessorFn: (m) => m.pours.length, meta: { num: true, wide: true } },
   {
     id: 'latest',
     header: 'Latest ΔE00 per zone',
-    sort: worstDelta,
-    cell: (m) => {
-      const pour = latestPour(m);
+    accessorFn: worstDelta,
+    cell: ({ row }) => {
+      const pour = latestPour(row.original);
       if (!pour) return <span className="text-ink-soft">no pours yet</span>;
       return (
         <ul className="space-y-0.5">
@@ -53,90 +57,83 @@ const columns: Column[] = [
       );
     },
   },
-  { id: 'activity', header: 'Last activity', sort: (m) => m.updatedAt, cell: (m) => <When at={m.updatedAt} dayOnly />, wide: true },
-  { id: 'maker', header: 'Started by', sort: (m) => m.createdBy ?? '—', cell: (m) => m.createdBy ?? '—', wide: true },
+  { id: 'activity', header: 'Last activity', accessorFn: (m) => m.updatedAt, cell: ({ getValue }) => <When at={getValue<number>()} dayOnly />, meta: { wide: true } },
+  { id: 'maker', header: 'Started by', accessorFn: (m) => m.createdBy ?? '—', meta: { wide: true } },
 ];
 
 // At phone width the table keeps what a maker scans for — the match, its
 // status and the latest ΔE00 — and leaves the rest to wider screens; the
 // match's name stays pinned at the left if the table still scrolls.
-function cellClass(c: Column): string {
-  if (c.wide) return 'hidden md:table-cell';
-  return c.id === 'name' ? 'sticky left-0 z-10 bg-inherit' : '';
+function cellClass(id: string, meta: unknown): string {
+  if ((meta as { wide?: boolean } | undefined)?.wide) return 'hidden md:table-cell';
+  return id === 'name' ? 'sticky left-0 z-10 bg-inherit' : '';
 }
 
-type Sorting = { id: string; desc: boolean } | null;
-const ascFirst = (c: Column, data: MatchView[]) => data.length > 0 && typeof c.sort!(data[0]!) === 'string';
-
-// Sorting and filtering by hand (a few dozen lines instead of a table library in the browser).
-export function MatchesTable({ data }: { data: MatchView[] }) {
-  const [sorting, setSorting] = useState<Sorting>({ id: 'activity', desc: true });
-  const [search, setSearch] = useState('');
-  const [status, setStatus] = useState('');
-  const rows = useMemo(() => {
-    const q = search.toLowerCase();
-    const kept = data.filter((m) => (!status || m.status === status) && (!q || m.name.toLowerCase().includes(q) || (m.notes ?? '').toLowerCase().includes(q)));
-    const col = sorting && columns.find((c) => c.id === sorting.id);
-    if (!col?.sort) return kept;
-    const key = col.sort;
-    const sign = sorting!.desc ? -1 : 1;
-    return [...kept].sort((a, b) => {
-      const x = key(a), y = key(b);
-      return sign * (x < y ? -1 : x > y ? 1 : 0);
-    });
-  }, [data, search, status, sorting]);
-  const toggle = (c: Column) => {
-    const first = !ascFirst(c, data);
-    if (sorting?.id !== c.id) return setSorting({ id: c.id, desc: first });
-    if (sorting.desc === first) return setSorting({ id: c.id, desc: !first });
-    setSorting(null);
-  };
+// The search and status filter: the server filters (GET /api/matches?q&status).
+export function MatchesFilters({ search, onSearch, status, onStatus }: { search: string; onSearch: (v: string) => void; status: string; onStatus: (v: string) => void }) {
   return (
-    <div>
-      <div className="mb-3 flex flex-wrap gap-3">
-        <label className="min-w-48 flex-1">
-          <span className="sr-only">Search matches</span>
-          <input type="search" placeholder="Search by name or notes" value={search} onChange={(e) => setSearch(e.target.value)} className={inputClass} />
-        </label>
-        <label className="w-44">
-          <span className="sr-only">Status</span>
-          <select value={status} onChange={(e) => setStatus(e.target.value)} className={inputClass} aria-label="Filter by status">
-            <option value="">All statuses</option>
-            {MATCH_STATUSES.map((s) => <option key={s} value={s}>{s.replace('_', ' ')}</option>)}
-          </select>
-        </label>
-      </div>
-      <div className="overflow-x-auto rounded-lg border border-panel-line bg-white">
-        <table className="w-full text-left text-sm" aria-label="Matches">
-          <thead className="bg-panel-deep [&_tr]:bg-panel-deep">
-            <tr>
-              {columns.map((c) => {
-                const sorted = sorting?.id === c.id ? (sorting.desc ? 'desc' : 'asc') : false;
+    <div className="mb-3 flex flex-wrap gap-3">
+      <label className="min-w-48 flex-1">
+        <span className="sr-only">Search matches</span>
+        <input type="search" placeholder="Search by name or notes" value={search} onChange={(e) => onSearch(e.target.value)} className={inputClass} />
+      </label>
+      <label className="w-44">
+        <span className="sr-only">Status</span>
+        <select value={status} onChange={(e) => onStatus(e.target.value)} className={inputClass} aria-label="Filter by status">
+          <option value="">All statuses</option>
+          {MATCH_STATUSES.map((s) => <option key={s} value={s}>{s.replace('_', ' ')}</option>)}
+        </select>
+      </label>
+    </div>
+  );
+}
+
+// The loaded matches, sorted in the browser by the column a maker picks.
+export function MatchesTable({ data }: { data: MatchView[] }) {
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'activity', desc: true }]);
+  const table = useReactTable({
+    data,
+    columns,
+    state: { sorting },
+    onSortingChange: setSorting,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+  });
+  return (
+    <div className="overflow-x-auto rounded-lg border border-panel-line bg-white">
+      <table className="w-full text-left text-sm" aria-label="Matches">
+        <thead className="bg-panel-deep [&_tr]:bg-panel-deep">
+          {table.getHeaderGroups().map((hg) => (
+            <tr key={hg.id}>
+              {hg.headers.map((h) => {
+                const sorted = h.column.getIsSorted();
                 return (
-                  <th key={c.id} className={`p-0 ${cellClass(c)}`} aria-sort={sorted ? SORT_ARIA[sorted] : undefined}>
-                    {c.sort ? (
-                      <button type="button" onClick={() => toggle(c)} className="flex min-h-tap w-full items-center gap-1 p-3 text-left font-semibold">
-                        {c.header}
+                  <th key={h.id} className={`p-0 ${cellClass(h.column.id, h.column.columnDef.meta)}`} aria-sort={sorted ? SORT_ARIA[sorted] : undefined}>
+                    {h.column.getCanSort() ? (
+                      <button type="button" onClick={h.column.getToggleSortingHandler()} className="flex min-h-tap w-full items-center gap-1 p-3 text-left font-semibold">
+                        {flexRender(h.column.columnDef.header, h.getContext())}
                         <span aria-hidden className="text-ink-soft">{sorted ? SORT_MARK[sorted] : '↕'}</span>
                       </button>
                     ) : (
-                      <span className="block p-3 font-semibold">{c.header}</span>
+                      <span className="block p-3 font-semibold">{flexRender(h.column.columnDef.header, h.getContext())}</span>
                     )}
                   </th>
                 );
               })}
             </tr>
-          </thead>
-          <tbody>
-            {rows.map((m) => (
-              <tr key={m.id} className="border-t border-panel-line bg-white align-top">
-                {columns.map((c) => <td key={c.id} className={`p-3 ${cellClass(c)}`}>{c.cell(m)}</td>)}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-        {rows.length === 0 ? <p className="p-4 text-ink-soft">No match fits this search.</p> : null}
-      </div>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) => (
+            <tr key={row.id} className="border-t border-panel-line bg-white align-top">
+              {row.getVisibleCells().map((cell) => (
+                <td key={cell.id} className={`p-3 ${cellClass(cell.column.id, cell.column.columnDef.meta)}`}>{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
+              ))}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      {table.getRowModel().rows.length === 0 ? <p className="p-4 text-ink-soft">No match fits this search.</p> : null}
     </div>
   );
 }

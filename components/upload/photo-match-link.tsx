@@ -32,7 +32,9 @@ export function PhotoMatchLine({ link }: { link: PhotoMatchLink | null }) {
 // Reuse a photo as the reference of an open match: it becomes that match's
 // draft target, and the match page opens on it, ready to mark.
 export function ReuseAsReference({ photoId, current }: { photoId: string; current: PhotoMatchLink | null }) {
-  const { data: matches } = useSWR<{ id: string; name: string; status: string }[]>('/api/matches', swrFetcher);
+  // Only the open matches, in one page: the whole list with every pour is not needed here.
+  const { data } = useSWR<{ items: { id: string; name: string; status: string }[] }>('/api/matches?status=open&limit=200', swrFetcher);
+  const matches = data?.items;
   const router = useRouter();
   const id = useId();
   const [matchId, setMatchId] = useState('');

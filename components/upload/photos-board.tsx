@@ -1,8 +1,9 @@
 'use client';
 
 import { useState } from 'react';
-import useSWR from 'swr';
+import useSWRInfinite from 'swr/infinite';
 import type { PhotoListItem } from '@/db/queries/photos';
+import { Button } from '@/components/ui/button';
 import { When } from '@/components/ui/when';
 import { swrFetcher } from '@/lib/http/client';
 import { formatBytes, PHOTO_ENDPOINTS, type PhotoEndpoint } from '@/lib/uploads/limits';
@@ -17,10 +18,18 @@ const KIND_LABELS: Record<PhotoEndpoint, string> = {
   swatchPhoto: 'Swatch',
 };
 
-// The team's recent photos, with a dropzone for makers and up (the server decides anyway).
+type Page = { items: PhotoListItem[]; nextCursor: string | null };
+const PAGE = 48;
+const pageKey = (i: number, previous: Page | null) =>
+  i === 0 ? `/api/photos?limit=${PAGE}` : previous?.nextCursor ? `/api/photos?limit=${PAGE}&cursor=${encodeURIComponent(previous.nextCursor)}` : null;
+
+// The team's photos, newest first, a page at a time, with a dropzone for makers and up (the
+// server decides anyway).
 export function PhotosBoard({ canUpload }: { canUpload: boolean }) {
   const [endpoint, setEndpoint] = useState<PhotoEndpoint>('referencePhoto');
-  const { data, error, isLoading, mutate } = useSWR<PhotoListItem[]>('/api/photos', swrFetcher);
+  const { data: pages, error, isLoading, isValidating, mutate, size, setSize } = useSWRInfinite<Page>(pageKey, swrFetcher);
+  const data = pages?.flatMap((p) => p.items);
+  const more = Boolean(pages?.[pages.length - 1]?.nextCursor);
 
   return (
     <div className="space-y-6">
@@ -71,6 +80,11 @@ export function PhotosBoard({ canUpload }: { canUpload: boolean }) {
               </li>
             ))}
           </ul>
+        ) : null}
+        {more ? (
+          <div className="mt-4">
+            <Button variant="secondary" disabled={isValidating} onClick={() => void setSize(size + 1)}>{isValidating ? 'Loading…' : 'Show older photos'}</Button>
+          </div>
         ) : null}
       </section>
     </div>

@@ -1,31 +1,31 @@
 import 'server-only';
-import { and, asc, desc, eq, inArray } from 'drizzle-orm';
+import { type SQL, and, asc, desc, eq, inArray } from 'drizzle-orm';
 import { describeDifference, labToHex } from '../../lib/color';
-import { costOfBatch, defaultBase, getBase } from '../../lib/batches/batchMaterials';
+import { type StandardRecipe, costOfBatch, defaultBase, getBase, standardRecipe } from '../../lib/batches/batchMaterials';
 import { splitZoneCups } from '../../lib/recipes';
 import { sampleFigures } from './pours';
 import { batchMovements } from './stock';
 import { lightState } from './light';
 import type { DB } from '../open';
+import { type PageOf, type PageRequest, afterCursor, cutPage } from './paging';
 import { batches, matches, molds, pours, samples, teams, users, zones } from '../schema';
 
 // Production batches in the API's Batch shape: ΔE00 per zone against the
 // standard pour's measured colour, and pass/fail against the match's
 // tolerance (stored when the batch was logged).
-function batchViews(database: DB, teamId: string, where: { batchId?: string; matchId?: string; batchIds?: string[] }) {
-  const cond = where.batchIds
-    ? inArray(batches.id, where.batchIds)
-    : where.batchId ? eq(batches.id, where.batchId) : eq(batches.matchId, where.matchId!);
-  const rows = database
+// `where` picks the batches (with the team), read in (createdAt, id) order, `limit` at most.
+function batchViews(database: DB, teamId: string, where: SQL | undefined, order: 'asc' | 'desc' = 'asc', limit?: number) {
+  const by = order === 'asc' ? asc : desc;
+  const query = database
     .select({ b: batches, by: users.name, mold: molds.name, matchName: matches.name, tolerance: matches.tolerance, stdNumber: pours.number })
     .from(batches)
     .innerJoin(matches, eq(matches.id, batches.matchId))
     .innerJoin(pours, eq(pours.id, batches.standardPourId))
     .leftJoin(users, eq(users.id, batches.createdBy))
     .leftJoin(molds, eq(molds.id, batches.moldId))
-    .where(and(cond, eq(batches.teamId, teamId)))
-    .orderBy(asc(batches.createdAt), asc(batches.id))
-    .all();
+    .where(and(where, eq(batches.teamId, teamId)))
+    .orderBy(by(batches.createdAt), by(batches.id));
+  const rows = limit === undefined ? query.all() : query.limit(limit).all();
   if (rows.length === 0) return [];
   const batchIds = rows.map((r) => r.b.id);
   const stdIds = [...new Set(rows.map((r) => r.b.standardPourId))];
@@ -39,6 +39,13 @@ function batchViews(database: DB, teamId: string, where: { batchId?: string; mat
   const moldIds = [...new Set(rows.flatMap((r) => [r.b.moldId, ...(r.b.plan ?? []).map((p) => p.moldId)]).filter((x): x is string => !!x))];
   const moldRows = moldIds.length ? database.select().from(molds).where(and(eq(molds.teamId, teamId), inArray(molds.id, moldIds))).all() : [];
   const fallbackBase = defaultBase(database, teamId);
+  // Each standard's recipe is read once for all its batches in the list.
+  const standards = new Map<string, StandardRecipe>();
+  const standardOf = (id: string) => {
+    let s = standards.get(id);
+    if (!s) standards.set(id, (s = standardRecipe(database, teamId, id)));
+    return s;
+  };
   return rows.map(({ b, by, mold, matchName, tolerance, stdNumber }) => {
     const order = zoneOrder.filter((z) => z.matchId === b.matchId).map((z) => z.name);
     const stdZoneNames = order.filter((z) => stdSamples.some((x) => x.pourId === b.standardPourId && x.zone === z));
@@ -54,7 +61,7 @@ function batchViews(database: DB, teamId: string, where: { batchId?: string; mat
     const base = b.baseColorantId ? getBase(database, teamId, b.baseColorantId) : fallbackBase;
     const cost = costOfBatch(database, teamId, {
       standardPourId: b.standardPourId, zoneCups, base, dropsPerMl: team.dropsPerMl, sprueAllowanceMl: team.sprueAllowanceMl,
-      molds: costMolds, baits: b.baitsActual ?? b.baitsExpected,
+      molds: costMolds, baits: b.baitsActual ?? b.baitsExpected, standard: standardOf(b.standardPourId),
     });
     const stock = moves.filter((m) => m.batchId === b.id).map(({ batchId: _b, ...m }) => m);
     const zs = batchSamples
@@ -106,20 +113,29 @@ function batchViews(database: DB, teamId: string, where: { batchId?: string; mat
 }
 
 export function getBatch(database: DB, teamId: string, batchId: string) {
-  return batchViews(database, teamId, { batchId })[0] ?? null;
+  return batchViews(database, teamId, eq(batches.id, batchId))[0] ?? null;
 }
 
 // A match's batches, oldest first (the order of a run chart).
 export function listBatches(database: DB, teamId: string, matchId: string) {
-  return batchViews(database, teamId, { matchId });
+  return batchViews(database, teamId, eq(batches.matchId, matchId));
 }
 
 // The team's most recent batches across all its standards, newest first.
 export function listRecentBatches(database: DB, teamId: string, limit = 100) {
-  const ids = database.select({ id: batches.id }).from(batches).where(eq(batches.teamId, teamId))
-    .orderBy(desc(batches.createdAt), desc(batches.id)).limit(limit).all().map((r) => r.id);
-  if (ids.length === 0) return [];
-  return batchViews(database, teamId, { batchIds: ids }).reverse();
+  return pageRecentBatches(database, teamId, { limit, cursor: null }).items;
+}
+
+// One page of them, newest first (keyset on createdAt, id: batches_team_created_idx).
+export function pageRecentBatches(database: DB, teamId: string, page: PageRequest): PageOf<BatchView> {
+  const views = batchViews(database, teamId, afterCursor(batches.createdAt, batches.id, page.cursor, 'desc'), 'desc', page.limit + 1);
+  return cutPage(views, page.limit, (v) => ({ at: v.createdAt, id: v.id }), (kept) => kept);
+}
+
+// One page of a match's batches, oldest first (the run chart's order).
+export function pageMatchBatches(database: DB, teamId: string, matchId: string, page: PageRequest): PageOf<BatchView> {
+  const views = batchViews(database, teamId, and(eq(batches.matchId, matchId), afterCursor(batches.createdAt, batches.id, page.cursor, 'asc')), 'asc', page.limit + 1);
+  return cutPage(views, page.limit, (v) => ({ at: v.createdAt, id: v.id }), (kept) => kept);
 }
 
 export type BatchView = NonNullable<ReturnType<typeof getBatch>>;

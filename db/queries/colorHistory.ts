@@ -8,14 +8,15 @@ import { colorants, molds, pours, recipeLines, samples, swatches } from '../sche
 type Doses = Record<string, number>;
 
 // Doses per cup of the modelled colorants (MODELLED_KINDS) of every pour's zones, keyed by
-// "pourId|zone". `where` narrows the pours (a team, a match).
-function poursDoses(database: DB, teamId: string, matchId?: string): Map<string, Doses> {
+// "pourId|zone": of the whole team, or of one match's pours up to number `upTo` (read through
+// pours_match_number, not every pour of the team).
+function poursDoses(database: DB, teamId: string, match?: { id: string; upTo: number }): Map<string, Doses> {
   const rows = database
     .select({ pourId: recipeLines.pourId, zone: recipeLines.zone, colorantId: recipeLines.colorantId, amount: recipeLines.amount, unit: recipeLines.unit })
     .from(recipeLines)
     .innerJoin(pours, eq(pours.id, recipeLines.pourId))
     .innerJoin(colorants, eq(colorants.id, recipeLines.colorantId))
-    .where(and(eq(pours.teamId, teamId), matchId ? eq(pours.matchId, matchId) : undefined, inArray(colorants.kind, [...MODELLED_KINDS])))
+    .where(and(eq(pours.teamId, teamId), match ? and(eq(pours.matchId, match.id), lte(pours.number, match.upTo)) : undefined, inArray(colorants.kind, [...MODELLED_KINDS])))
     .all();
   const out = new Map<string, Doses>();
   for (const r of rows) {
@@ -66,7 +67,7 @@ export function loadColorHistory(database: DB, teamId: string): DoseObservation[
 // One match's pours up to and including pour `upTo`, oldest first, per zone: its own history,
 // which corrects the shop's model locally.
 export function loadMatchHistory(database: DB, teamId: string, matchId: string, upTo: number): Map<string, DoseObservation[]> {
-  const doses = poursDoses(database, teamId, matchId);
+  const doses = poursDoses(database, teamId, { id: matchId, upTo });
   const out = new Map<string, DoseObservation[]>();
   for (const s of database
     .select({ pourId: samples.pourId, zone: samples.zone, l: samples.l, a: samples.a, b: samples.b })

@@ -1,5 +1,5 @@
 import 'server-only';
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, asc, eq, inArray } from 'drizzle-orm';
 import type { DB } from '../open';
 import { auditEvents, pours, signOffs, users } from '../schema';
 
@@ -20,7 +20,7 @@ export type HistoryEntry = {
 // the team's; every query filters by the team again all the same.
 export function matchHistory(database: DB, teamId: string, matchId: string): HistoryEntry[] {
   const pourRows = database.select({ id: pours.id, number: pours.number }).from(pours)
-    .where(and(eq(pours.matchId, matchId), eq(pours.teamId, teamId))).all();
+    .where(and(eq(pours.matchId, matchId), eq(pours.teamId, teamId))).orderBy(asc(pours.number)).all();
   if (pourRows.length === 0) return [];
   const numberOf = new Map(pourRows.map((p) => [p.id, p.number]));
   const person = (id: string | null, name: string | null) => (id ? { id, name: name ?? '' } : null);

@@ -1,5 +1,5 @@
 import 'server-only';
-import { and, desc, eq, isNotNull } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import type { Shape } from '../../lib/color/types';
 import type { DB } from '../open';
 import { type Sample, samples } from '../schema';
@@ -22,19 +22,4 @@ export function targetHasCard(database: DB, teamId: string, matchId: string): bo
 /** Light of a compared photo against its reference: both corrected, or one not. */
 export function lightState(zoneSamples: Pick<Sample, 'whiteBalance'>[], referenceCorrected: boolean): LightState {
   return { corrected: zoneSamples.some(applied), referenceCorrected };
-}
-
-/**
- * The grey card as last marked on any photo of the match (reference, pour or
- * batch): its shape and nominal L*, offered to the next photo's sampler.
- */
-export function lastNeutral(database: DB, teamId: string, matchId: string): NeutralMark | null {
-  const row = database
-    .select({ neutral: samples.neutral })
-    .from(samples)
-    .where(and(eq(samples.teamId, teamId), eq(samples.matchId, matchId), isNotNull(samples.neutral)))
-    .orderBy(desc(samples.createdAt))
-    .limit(1)
-    .get();
-  return (row?.neutral as NeutralMark | undefined) ?? null;
 }

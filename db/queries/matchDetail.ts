@@ -1,9 +1,8 @@
 import 'server-only';
-import { and, asc, eq } from 'drizzle-orm';
 import type { Shape } from '../../lib/color/types';
 import type { DB } from '../open';
-import { matches, photos, samples } from '../schema';
-import { type NeutralMark, lastNeutral, targetHasCard } from './light';
+import type { NeutralMark } from './light';
+import { matchReads } from './matchReads';
 import { getMatch, type MatchView } from './matches';
 
 export type TargetPhoto = { photoId: string; width: number; height: number; zones: { name: string; shape: Shape; lab: { l: number; a: number; b: number }; hex: string }[] };
@@ -20,13 +19,9 @@ export type MatchDetail = Omit<MatchView, 'target'> & { target: TargetDetail | n
 export function getMatchDetail(database: DB, teamId: string, matchId: string): MatchDetail | null {
   const match = getMatch(database, teamId, matchId);
   if (!match) return null;
-  const rows = database
-    .select({ s: samples, width: photos.width, height: photos.height })
-    .from(samples)
-    .innerJoin(photos, eq(photos.id, samples.photoId))
-    .where(and(eq(samples.matchId, matchId), eq(samples.purpose, 'target'), eq(samples.teamId, teamId)))
-    .orderBy(asc(samples.createdAt))
-    .all();
+  const reads = matchReads(database);
+  const args = { matchId, teamId };
+  const rows = reads.targetSamples.all(args);
   const byPhoto = new Map<string, TargetPhoto>();
   for (const { s, width, height } of rows) {
     const p = byPhoto.get(s.photoId) ?? { photoId: s.photoId, width, height, zones: [] };
@@ -46,12 +41,8 @@ export function getMatchDetail(database: DB, teamId: string, matchId: string): M
     ? { zones: match.target.zones.map((z) => ({ ...z, flakeCoverage: flakeOf(z.name), uncertainty: uncertaintyOf(z.name) })), photos: targetPhotos }
     : null;
   // A reference photo uploaded but not yet measured (kept across reloads).
-  const draft =
-    database
-      .select({ photoId: photos.id, width: photos.width, height: photos.height })
-      .from(matches)
-      .innerJoin(photos, and(eq(photos.id, matches.draftPhotoId), eq(photos.teamId, teamId)))
-      .where(and(eq(matches.id, matchId), eq(matches.teamId, teamId)))
-      .get() ?? null;
-  return { ...match, target, targetPhotos, draft, lastNeutral: lastNeutral(database, teamId, matchId), targetHasCard: targetHasCard(database, teamId, matchId) };
+  const draft = reads.draft.get(args) ?? null;
+  // Whether a reference was corrected from a grey card, from the target samples read above.
+  const hasCard = rows.some((r) => Boolean((r.s.whiteBalance as { applied?: boolean } | null)?.applied));
+  return { ...match, target, targetPhotos, draft, lastNeutral: (reads.lastNeutral.get(args)?.neutral as NeutralMark | undefined) ?? null, targetHasCard: hasCard };
 }

@@ -1,8 +1,10 @@
 import 'server-only';
-import { and, asc, desc, eq, inArray } from 'drizzle-orm';
+import { type SQL, and, asc, desc, eq, inArray, or, sql } from 'drizzle-orm';
 import { labToHex } from '../../lib/color';
 import type { DB } from '../open';
-import { matches, pours, samples, users, zones } from '../schema';
+import { type MatchStatus, matches, pours, samples, users, zones } from '../schema';
+import { matchReads } from './matchReads';
+import { type PageOf, type PageRequest, afterCursor, cutPage } from './paging';
 
 export type LabValue = { l: number; a: number; b: number };
 export type TargetZone = { name: string; lab: LabValue; hex: string; spread: number | null };
@@ -28,35 +30,88 @@ export type MatchView = {
   updatedAt: number;
 };
 
+export type MatchFilter = { status?: MatchStatus; q?: string };
+
+// The filters in SQL: status, and a search of name and notes (LIKE, case-blind in ASCII).
+function matchWhere(teamId: string, filter: MatchFilter): SQL {
+  const like = filter.q ? `%${filter.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%` : null;
+  return and(
+    eq(matches.teamId, teamId),
+    filter.status ? eq(matches.status, filter.status) : undefined,
+    like ? or(sql`${matches.name} like ${like} escape '\\'`, sql`${matches.notes} like ${like} escape '\\'`) : undefined,
+  )!;
+}
+
+const matchColumns = { m: matches, creator: users.name };
+type MatchRow = { m: typeof matches.$inferSelect; creator: string | null };
+
+function selectMatches(database: DB, where: SQL | undefined) {
+  return database.select(matchColumns).from(matches).leftJoin(users, eq(users.id, matches.createdBy)).where(where);
+}
+
 // The team's matches in the API's Match shape, newest activity first.
-export function listMatches(database: DB, teamId: string, ids?: string[]): MatchView[] {
-  const where = ids ? and(eq(matches.teamId, teamId), inArray(matches.id, ids)) : eq(matches.teamId, teamId);
-  const rows = database
-    .select({ m: matches, creator: users.name })
-    .from(matches)
-    .leftJoin(users, eq(users.id, matches.createdBy))
-    .where(where)
-    .orderBy(desc(matches.updatedAt))
+export function listMatches(database: DB, teamId: string, filter: MatchFilter = {}): MatchView[] {
+  return matchViews(database, selectMatches(database, matchWhere(teamId, filter)).orderBy(desc(matches.updatedAt), desc(matches.id)).all());
+}
+
+// One page of them: keyset on (updatedAt, id), newest first.
+export function pageMatches(database: DB, teamId: string, filter: MatchFilter, page: PageRequest): PageOf<MatchView> {
+  const rows = selectMatches(database, and(matchWhere(teamId, filter), afterCursor(matches.updatedAt, matches.id, page.cursor, 'desc')))
+    .orderBy(desc(matches.updatedAt), desc(matches.id))
+    .limit(page.limit + 1)
     .all();
+  return cutPage(rows, page.limit, (r) => ({ at: r.m.updatedAt, id: r.m.id }), (kept) => matchViews(database, kept));
+}
+
+// One match, through the prepared reads of db/queries/matchReads.ts.
+export function getMatch(database: DB, teamId: string, matchId: string): MatchView | null {
+  const reads = matchReads(database);
+  const args = { matchId, teamId };
+  const row = reads.match.get(args);
+  if (!row) return null;
+  return assemble([row], {
+    zonesOf: new Map([[matchId, reads.zones.all(args).map((r) => r.zones)]]),
+    poursOf: new Map([[matchId, reads.pours.all(args)]]),
+    samplesOf: groupBy(reads.pourSamples.all(args), (s) => s.pourId ?? ''),
+  })[0]!;
+}
+
+type Parts = {
+  zonesOf: Map<string, (typeof zones.$inferSelect)[]>;
+  poursOf: Map<string, { id: string; matchId: string; number: number; status: string; createdAt: number }[]>;
+  samplesOf: Map<string, { pourId: string | null; zone: string; dE00: number | null }[]>;
+};
+
+// Each match's zones, pours and the pours' ΔE00, read for just these matches and grouped by key.
+function matchViews(database: DB, rows: MatchRow[]): MatchView[] {
   if (rows.length === 0) return [];
   const matchIds = rows.map((r) => r.m.id);
-  const zoneRows = database.select().from(zones).where(inArray(zones.matchId, matchIds)).orderBy(asc(zones.position)).all();
+  const zonesOf = groupBy(
+    database.select().from(zones).where(inArray(zones.matchId, matchIds)).orderBy(asc(zones.matchId), asc(zones.position)).all(),
+    (z) => z.matchId,
+  );
   const pourRows = database
     .select({ id: pours.id, matchId: pours.matchId, number: pours.number, status: pours.status, createdAt: pours.createdAt })
     .from(pours)
     .where(inArray(pours.matchId, matchIds))
-    .orderBy(asc(pours.number))
+    .orderBy(asc(pours.matchId), asc(pours.number))
     .all();
-  const pourIds = pourRows.map((p) => p.id);
-  const sampleRows = pourIds.length
-    ? database
-        .select({ pourId: samples.pourId, zone: samples.zone, dE00: samples.dE00 })
-        .from(samples)
-        .where(and(eq(samples.purpose, 'pour'), inArray(samples.pourId, pourIds)))
-        .all()
-    : [];
+  const poursOf = groupBy(pourRows, (p) => p.matchId);
+  // The pours' samples through the match (samples_match_idx), not a list of every pour id.
+  const samplesOf = groupBy(
+    database
+      .select({ pourId: samples.pourId, zone: samples.zone, dE00: samples.dE00 })
+      .from(samples)
+      .where(and(inArray(samples.matchId, matchIds), eq(samples.purpose, 'pour')))
+      .all(),
+    (s) => s.pourId ?? '',
+  );
+  return assemble(rows, { zonesOf, poursOf, samplesOf });
+}
+
+function assemble(rows: MatchRow[], { zonesOf, poursOf, samplesOf }: Parts): MatchView[] {
   return rows.map(({ m, creator }) => {
-    const zs = zoneRows.filter((z) => z.matchId === m.id);
+    const zs = zonesOf.get(m.id) ?? [];
     const hasTarget = zs.length > 0 && zs.every((z) => z.targetL !== null);
     return {
       id: m.id,
@@ -75,15 +130,13 @@ export function listMatches(database: DB, teamId: string, ids?: string[]): Match
             })),
           }
         : null,
-      pours: pourRows
-        .filter((p) => p.matchId === m.id)
-        .map((p) => ({
-          id: p.id,
-          number: p.number,
-          status: p.status,
-          createdAt: p.createdAt,
-          zones: sampleRows.filter((s) => s.pourId === p.id).map((s) => ({ name: s.zone, dE00: s.dE00 })),
-        })),
+      pours: (poursOf.get(m.id) ?? []).map((p) => ({
+        id: p.id,
+        number: p.number,
+        status: p.status,
+        createdAt: p.createdAt,
+        zones: (samplesOf.get(p.id) ?? []).map((s) => ({ name: s.zone, dE00: s.dE00 })),
+      })),
       standardPourId: m.standardPourId,
       createdBy: creator,
       createdAt: m.createdAt,
@@ -92,6 +145,13 @@ export function listMatches(database: DB, teamId: string, ids?: string[]): Match
   });
 }
 
-export function getMatch(database: DB, teamId: string, matchId: string): MatchView | null {
-  return listMatches(database, teamId, [matchId])[0] ?? null;
+function groupBy<T>(rows: T[], key: (r: T) => string): Map<string, T[]> {
+  const out = new Map<string, T[]>();
+  for (const r of rows) {
+    const k = key(r);
+    const list = out.get(k);
+    if (list) list.push(r);
+    else out.set(k, [r]);
+  }
+  return out;
 }

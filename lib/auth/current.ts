@@ -1,5 +1,5 @@
 import 'server-only';
-import { cookies } from 'next/headers';
+import { cookies, headers } from 'next/headers';
 import { redirect } from 'next/navigation';
 import { cache } from 'react';
 import { db } from '@/db';
@@ -12,10 +12,21 @@ import { luciaFor, validateSessionToken } from './session';
 
 export type { Member };
 
+// The session token from the request's Cookie header. The read-only headers are cheap;
+// the mutable cookie jar of a route handler is built only when the cookie must move.
+// (A token is 40 hex digits, so the value needs no decoding.)
+function sessionToken(cookieHeader: string | null): string | undefined {
+  if (!cookieHeader) return undefined;
+  for (const part of cookieHeader.split(';')) {
+    const eq = part.indexOf('=');
+    if (eq > 0 && part.slice(0, eq).trim() === SESSION_COOKIE) return part.slice(eq + 1).trim();
+  }
+  return undefined;
+}
+
 // Reads the session cookie once per request and returns the member, or null.
 export const getCurrentMember = cache(async (): Promise<Member | null> => {
-  const jar = await cookies();
-  const token = jar.get(SESSION_COOKIE)?.value;
+  const token = sessionToken((await headers()).get('cookie'));
   if (!token) return null;
   const { member, fresh } = await validateSessionToken(db(), token);
   if (!member) return null;
@@ -24,7 +35,7 @@ export const getCurrentMember = cache(async (): Promise<Member | null> => {
     // Server components may not set cookies; the next action or API call will.
     const c = luciaFor(db()).createSessionCookie(token);
     try {
-      jar.set(c.name, c.value, c.attributes);
+      (await cookies()).set(c.name, c.value, c.attributes);
     } catch {
       /* read-only cookies in a server component */
     }

@@ -23,20 +23,29 @@ export function getBase(database: Reader, teamId: string, id: string) {
 // What a batch of a standard takes from stock: the standard's recipe for each
 // zone's own cups, and the batch's plastisol from its base (lib/recipes
 // batchDraws), with each colorant's stock and cost as they are now.
-export function batchMaterials(database: Reader, teamId: string, opts: { standardPourId: string; zoneCups: { zone: string; cups: number }[]; base: DrawColorant | null; dropsPerMl: number }) {
-  const recipe = database.select({ zone: recipeLines.zone, colorantId: recipeLines.colorantId, amount: recipeLines.amount, unit: recipeLines.unit })
-    .from(recipeLines).where(eq(recipeLines.pourId, opts.standardPourId)).orderBy(asc(recipeLines.position)).all();
-  const ids = [...new Set(recipe.map((l) => l.colorantId))];
-  const rows = ids.length ? database.select(colorantCols).from(colorants).where(and(eq(colorants.teamId, teamId), inArray(colorants.id, ids))).all() : [];
+// `standard`: the standard's recipe and colorants when the caller read them already (a list
+// of batches of one standard reads them once).
+export function batchMaterials(database: Reader, teamId: string, opts: { standardPourId: string; zoneCups: { zone: string; cups: number }[]; base: DrawColorant | null; dropsPerMl: number; standard?: StandardRecipe }) {
+  const { recipe, colorants: rows } = opts.standard ?? standardRecipe(database, teamId, opts.standardPourId);
   return { ...batchDraws({ zoneCups: opts.zoneCups, recipe, colorants: rows, base: opts.base, dropsPerMl: opts.dropsPerMl }), colorants: rows };
 }
+
+// A standard pour's recipe per cup, with its colorants' stock and cost as they are now.
+export function standardRecipe(database: Reader, teamId: string, standardPourId: string) {
+  const recipe = database.select({ zone: recipeLines.zone, colorantId: recipeLines.colorantId, amount: recipeLines.amount, unit: recipeLines.unit })
+    .from(recipeLines).where(eq(recipeLines.pourId, standardPourId)).orderBy(asc(recipeLines.position)).all();
+  const ids = [...new Set(recipe.map((l) => l.colorantId))];
+  const rows = ids.length ? database.select(colorantCols).from(colorants).where(and(eq(colorants.teamId, teamId), inArray(colorants.id, ids))).all() : [];
+  return { recipe, colorants: rows };
+}
+export type StandardRecipe = ReturnType<typeof standardRecipe>;
 
 // The batch's cost from its materials, per bait of the batch (actual count,
 // else expected) and per bait in each mold it names.
 export function costOfBatch(
   database: Reader,
   teamId: string,
-  opts: { standardPourId: string; zoneCups: { zone: string; cups: number }[]; base: DrawColorant | null; dropsPerMl: number; sprueAllowanceMl: number; molds: CostMold[]; baits: number | null },
+  opts: { standardPourId: string; zoneCups: { zone: string; cups: number }[]; base: DrawColorant | null; dropsPerMl: number; sprueAllowanceMl: number; molds: CostMold[]; baits: number | null; standard?: StandardRecipe },
 ) {
   const m = batchMaterials(database, teamId, opts);
   const cups = opts.zoneCups.reduce((s, z) => s + z.cups, 0);

@@ -1,8 +1,9 @@
 import 'server-only';
-import { and, eq, isNull } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { Member } from '@/db/queries/members';
-import { batches, matches, molds, pours, samples, teams } from '@/db/schema';
+import { getLiveMold } from '@/db/queries/libraries';
+import { batches, matches, pours, samples, teams } from '@/db/schema';
 import { compareLab } from '@/lib/color';
 import { recordAudit } from '@/lib/audit';
 import { newId } from '@/lib/ids';
@@ -10,6 +11,7 @@ import { ApiError } from '@/lib/http/api';
 import { queueMail } from '@/lib/mail/queue';
 import { batchFailedMail } from '@/lib/mail/templates-production';
 import { loadMatch } from '@/lib/matches/loadMatch';
+import { insertSample } from '@/lib/matches/insertSample';
 import { comparedExtras, measureZones } from '@/lib/matches/measureZones';
 import { moldYield, splitZoneCups, zoneCupsProblem } from '@/lib/recipes';
 import { moveStock } from '@/lib/stock/moveStock';
@@ -29,7 +31,7 @@ export function standardZones(database: Pick<DB, 'select'>, standardPourId: stri
 function planMolds(database: DB, teamId: string, plan: { moldId: string; shots: number }[] | null) {
   if (!plan) return null;
   return plan.map((p, i) => {
-    const m = database.select().from(molds).where(and(eq(molds.id, p.moldId), eq(molds.teamId, teamId), isNull(molds.archivedAt))).get();
+    const m = getLiveMold(database, teamId, p.moldId);
     if (!m) throw new ApiError(400, 'invalid_body', `plan[${i}].moldId: no such mold in your library`);
     return { ...m, shots: p.shots };
   });
@@ -57,9 +59,7 @@ export async function logBatch(database: DB, member: Member, matchId: string, in
   const marked = new Set(input.zones.map((z) => z.name));
   const missing = [...stdNames].filter((n) => !marked.has(n));
   if (missing.length) throw new ApiError(400, 'invalid_body', `zones: mark every zone of the standard (missing: ${missing.join(', ')})`);
-  const mold = input.moldId
-    ? database.select().from(molds).where(and(eq(molds.id, input.moldId), eq(molds.teamId, teamId), isNull(molds.archivedAt))).get()
-    : undefined;
+  const mold = input.moldId ? getLiveMold(database, teamId, input.moldId) : undefined;
   if (input.moldId && !mold) throw new ApiError(400, 'invalid_body', 'moldId: no such mold in your library');
   const team = database.select({ sprue: teams.sprueAllowanceMl, dropsPerMl: teams.dropsPerMl }).from(teams).where(eq(teams.id, teamId)).get()!;
   const usable = mold && mold.cavities >= 1 && mold.mlPerCavity > 0;
@@ -101,15 +101,11 @@ export async function logBatch(database: DB, member: Member, matchId: string, in
     for (const d of draws) {
       if (d.amount > 0) moveStock(tx, { teamId, colorantId: d.colorantId, kind: 'batch', amount: -d.amount, batchId: id, createdBy: member.user.id });
     }
-    for (const { region: r, shape, cmp, extras } of figures) {
-      tx.insert(samples)
-        .values({
-          id: newId(), teamId, photoId: input.photoId, purpose: 'batch', matchId, batchId: id, zone: r.name, shape,
-          neutral: input.neutral ?? null, l: r.lab.l, a: r.lab.a, b: r.lab.b, hex: r.hex, pixels: r.pixels, kept: r.kept,
-          spread: r.spread, glare: r.glare, flake: r.flake, whiteBalance: measured.whiteBalance,
-          dE00: cmp.dE00, dL: cmp.dL, dC: cmp.dC, dH: cmp.dH, ...extras,
-        })
-        .run();
+    for (const { region, shape, cmp, extras } of figures) {
+      insertSample(tx, {
+        teamId, photoId: input.photoId, of: { purpose: 'batch', matchId, batchId: id }, region, shape,
+        neutral: input.neutral, whiteBalance: measured.whiteBalance, compared: { cmp, extras },
+      });
     }
     recordAudit(tx, {
       teamId, actorId: member.user.id, action: 'batch.logged', entity: 'batch', entityId: id,

@@ -2,7 +2,8 @@ import 'server-only';
 import { and, eq, inArray, isNull, max } from 'drizzle-orm';
 import type { DB } from '@/db/open';
 import type { Member } from '@/db/queries/members';
-import { colorants, matches, molds, pours, recipeLines, samples, teams } from '@/db/schema';
+import { colorants, matches, pours, recipeLines, teams } from '@/db/schema';
+import { getLiveMold } from '@/db/queries/libraries';
 import { targetUncertainties } from '@/db/queries/pours';
 import { compareLab } from '@/lib/color';
 import { recordAudit } from '@/lib/audit';
@@ -14,6 +15,7 @@ import { batchDraws, splitZoneCups } from '@/lib/recipes';
 import { moveStock } from '@/lib/stock/moveStock';
 import { toLibraryUnits } from './libraryUnits';
 import { assertZonesOfMatch, loadMatch } from './loadMatch';
+import { insertSample } from './insertSample';
 import { comparedExtras, measureZones } from './measureZones';
 
 // Measures a test pour's photo and stores it as the match's next numbered
@@ -43,7 +45,7 @@ export async function addPour(database: DB, member: Member, matchId: string, inp
   });
   const team = database.select({ dropsPerMl: teams.dropsPerMl }).from(teams).where(eq(teams.id, teamId)).get()!;
   const recipe = toLibraryUnits(input.recipe, known, team.dropsPerMl);
-  if (input.moldId && !database.select({ id: molds.id }).from(molds).where(and(eq(molds.id, input.moldId), eq(molds.teamId, teamId), isNull(molds.archivedAt))).get()) {
+  if (input.moldId && !getLiveMold(database, teamId, input.moldId)) {
     throw new ApiError(400, 'invalid_body', 'moldId: no such mold in your library (or it was archived)');
   }
   if (input.correctsPourId && !database.select({ id: pours.id }).from(pours).where(and(eq(pours.id, input.correctsPourId), eq(pours.matchId, matchId))).get()) {
@@ -65,16 +67,14 @@ export async function addPour(database: DB, member: Member, matchId: string, inp
     recipe.forEach((l, position) => tx.insert(recipeLines).values({ id: newId(), pourId: id, position, ...l }).run());
     measured.regions.forEach((r, i) => {
       const z = zoneRows.find((zr) => zr.name === r.name)!;
-      const cmp = compareLab({ l: z.targetL!, a: z.targetA!, b: z.targetB! }, r.lab, match.tolerance);
-      tx.insert(samples)
-        .values({
-          id: newId(), teamId, photoId: input.photoId, purpose: 'pour', matchId, pourId: id, zone: r.name,
-          shape: input.zones[i]!.shape, neutral: input.neutral ?? null, l: r.lab.l, a: r.lab.a, b: r.lab.b, hex: r.hex,
-          pixels: r.pixels, kept: r.kept, spread: r.spread, glare: r.glare, flake: r.flake, whiteBalance: measured.whiteBalance,
-          dE00: cmp.dE00, dL: cmp.dL, dC: cmp.dC, dH: cmp.dH,
-          ...comparedExtras(r, targetU.get(r.name) ?? null, measured.references[r.name], input.zones[i]!.reference, match.tolerance),
-        })
-        .run();
+      insertSample(tx, {
+        teamId, photoId: input.photoId, of: { purpose: 'pour', matchId, pourId: id }, region: r,
+        shape: input.zones[i]!.shape, neutral: input.neutral, whiteBalance: measured.whiteBalance,
+        compared: {
+          cmp: compareLab({ l: z.targetL!, a: z.targetA!, b: z.targetB! }, r.lab, match.tolerance),
+          extras: comparedExtras(r, targetU.get(r.name) ?? null, measured.references[r.name], input.zones[i]!.reference, match.tolerance),
+        },
+      });
     });
     for (const d of draws) {
       if (d.amount > 0) moveStock(tx, { teamId, colorantId: d.colorantId, kind: 'pour', amount: -d.amount, pourId: id, createdBy: member.user.id });

@@ -5,10 +5,10 @@ import type { Member } from '@/db/queries/members';
 import { matches, samples, zones } from '@/db/schema';
 import { deltaE2000, type Lab } from '@/lib/color';
 import { recordAudit } from '@/lib/audit';
-import { newId } from '@/lib/ids';
 import { ApiError } from '@/lib/http/api';
 import type { TargetInput } from '@/lib/validations/match';
 import { assertZonesOfMatch, loadMatch } from './loadMatch';
+import { insertSample } from './insertSample';
 import { measureZones } from './measureZones';
 
 // Samples the target zones on a reference photo. Sampling the same photo again
@@ -28,15 +28,11 @@ export async function setTarget(database: DB, member: Member, matchId: string, i
     tx.delete(samples)
       .where(and(eq(samples.matchId, matchId), eq(samples.purpose, 'target'), eq(samples.photoId, input.photoId), inArray(samples.zone, names)))
       .run();
-    measured.regions.forEach((r, i) => {
-      tx.insert(samples)
-        .values({
-          id: newId(), teamId: member.team.id, photoId: input.photoId, purpose: 'target', matchId, zone: r.name,
-          shape: input.zones[i]!.shape, neutral: input.neutral ?? null, l: r.lab.l, a: r.lab.a, b: r.lab.b, hex: r.hex,
-          pixels: r.pixels, kept: r.kept, spread: r.spread, glare: r.glare, flake: r.flake, whiteBalance: measured.whiteBalance,
-          uncertainty: r.uncertainty, shading: r.shading, other: r.other,
-        })
-        .run();
+    measured.regions.forEach((region, i) => {
+      insertSample(tx, {
+        teamId: member.team.id, photoId: input.photoId, of: { purpose: 'target', matchId }, region,
+        shape: input.zones[i]!.shape, neutral: input.neutral, whiteBalance: measured.whiteBalance,
+      });
     });
     // The draft reference photo is now a measured one.
     if (match.draftPhotoId === input.photoId) tx.update(matches).set({ draftPhotoId: null }).where(eq(matches.id, matchId)).run();

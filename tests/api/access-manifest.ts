@@ -67,6 +67,7 @@ export const ROUTES: RouteEntry[] = [
   { method: 'POST', path: '/api/matches/:id/draft-photo', role: 'maker', id: 'match', body: { photoId: 'matrix-photo' } },
   { method: 'DELETE', path: '/api/matches/:id/draft-photo', role: 'maker', id: 'match' },
   { method: 'POST', path: '/api/matches/:id/target', role: 'maker', id: 'match', body: { photoId: 'matrix-photo', zones } },
+  { method: 'GET', path: '/api/matches/:id/pours', role: 'viewer', id: 'match' },
   { method: 'POST', path: '/api/matches/:id/pours', role: 'maker', id: 'match', body: { photoId: 'matrix-photo', recipe: [], zones } },
   { method: 'GET', path: '/api/matches/:id/batches', role: 'viewer', id: 'match' },
   { method: 'POST', path: '/api/matches/:id/batches', role: 'maker', id: 'match', body: { photoId: 'matrix-photo', zones, cups: 1 } },

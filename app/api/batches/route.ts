@@ -1,11 +1,14 @@
 import { db } from '@/db';
-import { listRecentBatches } from '@/db/queries/batches';
+import { listRecentBatches, pageRecentBatches } from '@/db/queries/batches';
 import { requireMember } from '@/lib/auth/current';
-import { json, withApi } from '@/lib/http/api';
+import { withApi } from '@/lib/http/api';
+import { listJson, pageOf, readQuery } from '@/lib/http/paging';
+import { pageQuerySchema } from '@/lib/validations/paging';
 
 // GET: the team's 100 most recent production batches across its standards,
-// newest first (viewer and above).
-export const GET = withApi(async () => {
+// newest first (viewer and above); `limit`/`cursor` page them all as { items, nextCursor }.
+export const GET = withApi(async (req) => {
   const member = await requireMember();
-  return json(listRecentBatches(db(), member.team.id));
+  const page = pageOf(readQuery(req, pageQuerySchema));
+  return listJson(page, () => listRecentBatches(db(), member.team.id), (p) => pageRecentBatches(db(), member.team.id, p));
 });

@@ -1,18 +1,23 @@
 import Link from 'next/link';
 import { db } from '@/db';
-import { listRecentBatches } from '@/db/queries/batches';
+import { pageRecentBatches } from '@/db/queries/batches';
 import { RecentBatches } from '@/components/production/recent-batches';
 import { LogBatchPicker } from '@/components/production/log-batch-picker';
 import { listStandards } from '@/db/queries/standards';
 import { requirePageMember } from '@/lib/auth/current';
 import { CsvDownload } from '@/components/library/csv-tools';
 import { roleAtLeast } from '@/lib/auth/roles';
+import { cursorOrNull, encodeCursor } from '@/lib/http/paging';
 
 export const metadata = { title: 'Batches' };
 
-export default async function BatchesPage() {
+const PAGE = 50;
+
+// A page of batches at a time: "Older batches" carries the cursor in the address.
+export default async function BatchesPage({ searchParams }: { searchParams: Promise<{ before?: string | string[] }> }) {
   const member = await requirePageMember();
-  const batches = listRecentBatches(db(), member.team.id);
+  const cursor = cursorOrNull((await searchParams).before);
+  const { items: batches, next } = pageRecentBatches(db(), member.team.id, { limit: PAGE, cursor });
   return (
     <section className="space-y-4">
       <div>
@@ -25,6 +30,12 @@ export default async function BatchesPage() {
       </div>
       {roleAtLeast(member.role, 'maker') ? <LogBatchPicker standards={listStandards(db(), member.team.id).map((s) => ({ matchId: s.matchId, name: s.name }))} /> : null}
       <RecentBatches batches={batches} />
+      {cursor || next ? (
+        <nav aria-label="More batches" className="flex flex-wrap gap-3">
+          {cursor ? <Link href="/batches" className="inline-flex min-h-tap items-center rounded-md border border-panel-line bg-white px-4 font-medium">Newest batches</Link> : null}
+          {next ? <Link href={`/batches?before=${encodeURIComponent(encodeCursor(next))}`} className="inline-flex min-h-tap items-center rounded-md border border-panel-line bg-white px-4 font-medium">Older batches</Link> : null}
+        </nav>
+      ) : null}
     </section>
   );
 }
