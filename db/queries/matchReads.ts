@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, asc, desc, eq, isNotNull, sql } from 'drizzle-orm';
 import type { DB } from '../open';
 import { matches, photos, pours, samples, users, zones } from '../schema';

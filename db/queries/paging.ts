@@ -1,3 +1,4 @@
+import 'server-only';
 import { type SQL, and, eq, gt, lt, or } from 'drizzle-orm';
 import type { SQLiteColumn } from 'drizzle-orm/sqlite-core';
 

@@ -1,3 +1,4 @@
+import 'server-only';
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import type { DB } from '../open';
 import { pours, samples } from '../schema';

@@ -1,3 +1,4 @@
+import 'server-only';
 // The worker side of the model-fitting pool (lib/matches/fitPool.ts): bundled
 // by scripts/build-worker.ts and run in a worker thread by piscina, so a refit
 // of the shop's colorant model (a few hundred milliseconds on a big shop)
