@@ -1,5 +1,6 @@
 import { differenceCiede2000 } from 'culori';
-import type { ColorSamples, Lab, RegionMeasure, Vec3 } from './types';
+import type { ColorSamples, Lab, Mat3, RegionMeasure, Vec3 } from './types';
+import { castAmbiguity } from './castAmbiguity';
 import { clusterFlake } from './clusterFlake';
 import { findGlareByShape } from './findGlareByShape';
 import { findOtherColour } from './findOtherColour';
@@ -30,8 +31,8 @@ const ciede2000 = differenceCiede2000(1, 1, 1);
 export interface RegionContext {
   /** How coarse the file's lossy compression was: 0 lossless, ≈ 0.2 JPEG q90, ≈ 0.5 q75 (jpegQuantScale). */
   compression?: number;
-  /** ΔE00 of the grey card's cast before correction (0 or absent without a card). */
-  cast?: number;
+  /** With a grey card: the other correction's XYZ over the one applied (castAmbiguity). */
+  otherLight?: Mat3;
 }
 
 /**
@@ -176,7 +177,7 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
     spread,
     glare: glareCount / n,
     flake,
-    uncertainty: regionUncertainty({ spread, basePixels: nb * step * step, compression: ctx.compression ?? 0, shading, coverage, flake: flake.groups.map((g) => g.lab), base, other: otherOut?.share ?? 0, cast: ctx.cast ?? 0 }),
+    uncertainty: regionUncertainty({ spread, basePixels: nb * step * step, compression: ctx.compression ?? 0, shading, coverage, flake: flake.groups.map((g) => g.lab), base, other: otherOut?.share ?? 0, lightModel: ctx.otherLight ? castAmbiguity(base, ctx.otherLight).dE00 : 0 }),
     shading,
     other: otherOut,
   };

@@ -83,6 +83,20 @@ describe('casts with the grey card, both kinds (issue 11 table, row 4)', () => {
     expect(unwarned.filter((o) => o.error > 2.5).map((o) => `${o.label}: ${o.error.toFixed(2)}`)).toEqual([]);
     // Daylight shade is a mild cast: it is corrected without a warning.
     expect(out.filter((o) => o.light === 'shade').every((o) => !o.out.whiteBalance.warning)).toBe(true);
+    // A cast that scales the camera's channels is undone exactly by the card (within the photo's
+    // own noise and compression), however strong.
+    const channel = out.filter((o) => o.kind === 'channel');
+    expect(channel.filter((o) => o.error > 1.0).map((o) => `${o.label}: ${o.error.toFixed(2)}`)).toEqual([]);
+    for (const o of out) expect(o.out.whiteBalance.method).toBe('channel');
+  });
+
+  it('the warning names the region and is given only where the card leaves the reading open by more than 2 ΔE00', () => {
+    for (const o of out) {
+      const w = o.out.whiteBalance.warning;
+      if (w) expect(w).toContain('"zone"');
+      // Where no warning is given, the ± of the light correction stays below the warning's level.
+      else expect(o.out.regions[0].uncertainty).toBeLessThanOrEqual(2.5 * 1.2);
+    }
   });
 
   it("reports the card's cast (ΔE00 from grey before correction) and the ± holds in ≥ 90 %", () => {
