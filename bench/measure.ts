@@ -30,6 +30,10 @@ const H = 3000;
 
 // A photo-like 12-megapixel JPEG: a shaded green body, camera-like noise, gold and black flake
 // specks (~8 %), a glare streak. Seeded, so every run measures the same image.
+export async function benchPhotoForProfile(): Promise<Buffer> {
+  return benchPhoto();
+}
+
 async function benchPhoto(): Promise<Buffer> {
   let seed = 12345;
   const rand = () => ((seed = (Math.imul(seed, 1103515245) + 12345) >>> 0) / 4294967296);

@@ -25,8 +25,10 @@ export const K = 2;
 export interface UncertaintyInputs {
   /** Median ΔE00 of the kept pixels to the base. */
   spread: number;
-  /** Pixels the base was averaged from. */
+  /** Sampled pixels the base was averaged from. */
   basePixels: number;
+  /** Pixels between lattice samples (1 = every pixel): samples this far apart are independent. */
+  step?: number;
   /** 0 lossless, else the JPEG quantisation scale. */
   compression: number;
   shading: number;
@@ -47,7 +49,10 @@ export interface UncertaintyInputs {
  * and the light correction.
  */
 export function regionUncertainty(x: UncertaintyInputs): number {
-  const nEff = Math.max(1, x.basePixels / CORRELATED_PIXELS);
+  // Neighbours share their noise (one in CORRELATED_PIXELS counts); lattice samples 3 or more
+  // pixels apart do not, so each counts once.
+  const step = x.step ?? 1;
+  const nEff = Math.max(1, (x.basePixels * Math.min(step * step, CORRELATED_PIXELS)) / CORRELATED_PIXELS);
   const scatter = (1.4826 * x.spread) / Math.sqrt(nEff);
   const flakeDistance = x.flake.reduce((m, f) => Math.max(m, deltaE2000(x.base, f)), 0);
   const parts = [

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { deltaE2000, measureRegion, packedRgbToLab, regionColors, regionPixels, shapeSpans, srgbToLab, weightedMedian } from '@/lib/color';
+import { deltaE2000, measureRegion, regionPixels, shapeSpans, srgbToLab, weightedMedian } from '@/lib/color';
 import { measurePhoto } from '@/lib/image';
 import { encode, gauss, rawImage, rng, type Rgb } from './synth';
 
@@ -16,13 +16,13 @@ describe('weightedMedian', () => {
       const half = pairs.reduce((s, p) => s + p[1], 0) / 2;
       let acc = 0;
       const brute = pairs.find((p) => (acc += p[1]) >= half)![0];
-      expect(weightedMedian(values, weights, -50, 50, 0.37, include)).toBe(brute);
+      expect(weightedMedian(values, weights, { range: [-50, 50], step: 0.37, include })).toBe(brute);
     }
-    expect(Number.isNaN(weightedMedian(new Float64Array(2), new Uint32Array([1, 1]), 0, 1, 0.1, new Uint8Array(2)))).toBe(true);
+    expect(Number.isNaN(weightedMedian(new Float64Array(2), new Uint32Array([1, 1]), { range: [0, 1], step: 0.1, include: new Uint8Array(2) }))).toBe(true);
   });
 });
 
-describe('regionColors', () => {
+describe('regionPixels', () => {
   const W = 30, H = 20;
   const rand = rng(9);
   const data = Uint8Array.from({ length: W * H * 3 }, () => Math.floor(rand() * 4) * 60);
@@ -30,7 +30,8 @@ describe('regionColors', () => {
 
   it('counts every pixel once and keeps the colours exact', () => {
     const spans = shapeSpans({ type: 'rect', x: 0, y: 0, w: 1, h: 1 }, W, H);
-    const s = regionColors(window, spans);
+    const rp = regionPixels(window, spans);
+    const s = rp.samples;
     expect(s.total).toBe(W * H);
     expect(s.pixels).toBe(W * H);
     expect(s.counts.reduce((a, b) => a + b, 0)).toBe(W * H);
@@ -40,12 +41,20 @@ describe('regionColors', () => {
       for (let j = 0; j < data.length; j += 3) if (data[j] === s.rgb[i * 3] && data[j + 1] === s.rgb[i * 3 + 1] && data[j + 2] === s.rgb[i * 3 + 2]) n++;
       expect(s.counts[i]).toBe(n);
     }
-    expect(Array.from(s.lab)).toEqual(Array.from(packedRgbToLab(s.rgb, s.size)));
+    for (let i = 0; i < s.size; i++) {
+      const lab = srgbToLab(s.rgb[i * 3], s.rgb[i * 3 + 1], s.rgb[i * 3 + 2]);
+      expect(Math.hypot(lab.l - s.lab[i * 3], lab.a - s.lab[i * 3 + 1], lab.b - s.lab[i * 3 + 2])).toBeLessThan(1e-9);
+    }
+    // Every pixel sits in its own cell and points at its colour.
+    for (let i = 0; i < rp.cell.length; i++) {
+      const x = rp.cell[i] % rp.gridW, y = (rp.cell[i] - x) / rp.gridW, j = (y * W + x) * 3;
+      expect([data[j], data[j + 1], data[j + 2]]).toEqual(Array.from(s.rgb.subarray(rp.sample[i] * 3, rp.sample[i] * 3 + 3)));
+    }
   });
 
   it('on a lattice, samples every step-th pixel of every step-th row (image coordinates)', () => {
     const spans = shapeSpans({ type: 'rect', x: 0.1, y: 0.1, w: 0.8, h: 0.8 }, W, H); // x 3..26, y 2..17
-    const s = regionColors({ ...window }, spans, undefined, 3);
+    const { samples: s } = regionPixels({ ...window }, spans, undefined, 3);
     expect(s.pixels).toBe(24 * 16);
     // Rows 3, 6, 9, 12, 15 and columns 3, 6, …, 24: 5 × 8.
     expect(s.total).toBe(5 * 8);
