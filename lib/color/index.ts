@@ -28,7 +28,7 @@ export { pixelColours } from './pixelColours';
 export { separateGlare } from './separateGlare';
 export { correctShading, SHADING_MIN } from './correctShading';
 export { cie94Distances } from './cie94Distances';
-export { trulyBase } from './trulyBase';
+export { trulyBase, type TrulyBaseInput } from './trulyBase';
 export { multiplyMat3 } from './multiplyMat3';
 export { rgbToXyzMatrix, SRGB_TO_XYZ } from './rgbToXyzMatrix';
 export { MAX_POLYGON_POINTS, shapeSchema } from './shapeSchema';

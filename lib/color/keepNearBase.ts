@@ -8,6 +8,7 @@ export const KEEP_MIN = 4;
 export const KEEP_MAX = 12;
 const MAX_ITERATIONS = 8;
 const CONVERGED = 0.01; // ΔE*ab: far below anything visible or reported
+const ITERATE_SAMPLE = 6_000;
 
 /**
  * Step 3 of measureRegion: from a robust start (medianLab), the mean of the pixels within T of the
@@ -22,28 +23,34 @@ export function keepNearBase(lab: Float32Array, glare: Uint8Array, start: Lab): 
   let base = start;
   cie94Distances(lab, base, dist);
   const keepWithin = Math.min(KEEP_MAX, Math.max(KEEP_MIN, KEEP_FACTOR * medianOf(dist, glare)));
-  const kept = new Uint8Array(n);
-  let keptCount = 0;
+  // The estimate settles on an even subset (ITERATE_SAMPLE pixels at most: the mean of thousands
+  // moves by far less than CONVERGED); then one pass over every pixel.
+  const every = Math.max(1, Math.floor(n / ITERATE_SAMPLE));
   for (let round = 0; round < MAX_ITERATIONS; round++) {
-    let sl = 0, sa = 0, sb = 0;
-    keptCount = 0;
-    for (let i = 0, j = 0; i < n; i++, j += 3) {
-      const k = !glare[i] && dist[i] <= keepWithin ? 1 : 0;
-      kept[i] = k;
-      if (!k) continue;
-      keptCount++;
+    let sl = 0, sa = 0, sb = 0, w = 0;
+    for (let i = 0; i < n; i += every) {
+      if (glare[i] || !(dist[i] <= keepWithin)) continue;
+      const j = i * 3;
+      w++;
       sl += lab[j]; sa += lab[j + 1]; sb += lab[j + 2];
     }
-    if (keptCount === 0) {
-      for (let i = 0; i < n; i++) kept[i] = glare[i] ? 0 : 1;
-      keptCount = kept.reduce((s, v) => s + v, 0);
-      break;
-    }
-    const next = { l: sl / keptCount, a: sa / keptCount, b: sb / keptCount };
+    if (w === 0) break;
+    const next = { l: sl / w, a: sa / w, b: sb / w };
     const moved = Math.hypot(next.l - base.l, next.a - base.a, next.b - base.b);
     base = next;
-    cie94Distances(lab, base, dist);
+    cie94Distances(lab, base, dist, every);
     if (moved < CONVERGED) break;
+  }
+  if (every > 1) cie94Distances(lab, base, dist);
+  const kept = new Uint8Array(n);
+  let keptCount = 0;
+  for (let i = 0; i < n; i++) {
+    kept[i] = !glare[i] && dist[i] <= keepWithin ? 1 : 0;
+    keptCount += kept[i];
+  }
+  if (keptCount === 0) {
+    for (let i = 0; i < n; i++) kept[i] = glare[i] ? 0 : 1;
+    keptCount = kept.reduce((s, v) => s + v, 0);
   }
   return { base, kept, keptCount, dist, keepWithin };
 }

@@ -51,7 +51,7 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
   let otherCount = 0;
   for (let i = 0; i < n; i++) otherCount += otherMask[i];
 
-  const { xyz: bx, count: nb } = trulyBase(lab, xyz, kept, glare, cell, gridW, gridH, near, keepWithin, (ctx.compression ?? 0) > 0 ? 2 : 1);
+  const { xyz: bx, count: nb } = trulyBase({ lab, xyz, kept, glare, rp, start: near, keepWithin, radius: (ctx.compression ?? 0) > 0 ? 2 : 1 });
   const out = new Float64Array(3);
   labInto(bx[0], bx[1], bx[2], out, 0);
   const base = { l: out[0], a: out[1], b: out[2] };

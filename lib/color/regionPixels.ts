@@ -30,6 +30,12 @@ export interface RegionPixels {
   step: number;
   cell: Int32Array;
   sample: Int32Array;
+  /**
+   * On a lattice (step > 1): per sampled pixel, the largest difference of 8-bit code (any
+   * channel) to a full-resolution neighbour within 1 and within 2 pixels (inside the window), so
+   * that a sample can tell whether it sits beside a speck the lattice does not see. Null for every pixel.
+   */
+  rough: [Uint8Array, Uint8Array] | null;
 }
 
 /**
@@ -71,6 +77,7 @@ export function regionPixels(
   const counts = new Uint32Array(1 << bits);
   const mask = keys.length - 1, shift = 32 - bits;
   let size = 0, n = 0;
+  const rough: [Uint8Array, Uint8Array] | null = step > 1 ? [new Uint8Array(area), new Uint8Array(area)] : null;
   for (let s = 0; s < spans.length; s += 3) {
     const y = spans[s];
     if (y % step !== 0) continue;
@@ -91,6 +98,7 @@ export function regionPixels(
       }
       counts[h]++;
       cell[n] = rowCell + x / step;
+      if (rough) roughAt(data, width, height, x - left, y - top, rough, n);
       slot[n++] = h;
     }
   }
@@ -130,7 +138,28 @@ export function regionPixels(
     // Neutral input stays exactly neutral, as in culori (floating-point residue otherwise).
     if (srgbNeutral && R === G && G === B) lab[j + 1] = lab[j + 2] = 0;
   }
-  return { samples: { rgb, lab, counts: outCounts, size, total: n, pixels }, xyz, clipped, gridW, gridH, step, cell, sample };
+  return { samples: { rgb, lab, counts: outCounts, size, total: n, pixels }, xyz, clipped, gridW, gridH, step, cell, sample, rough };
+}
+
+// Largest |Δcode| from the pixel at (x, y) of the window to its neighbours within 1 and 2 pixels.
+function roughAt(data: Uint8Array, width: number, height: number, x: number, y: number, out: [Uint8Array, Uint8Array], i: number): void {
+  const c = (y * width + x) * 3;
+  const r0 = data[c], g0 = data[c + 1], b0 = data[c + 2];
+  let near = 0, far = 0;
+  for (let dy = -2; dy <= 2; dy++) {
+    const yy = y + dy;
+    if (yy < 0 || yy >= height) continue;
+    for (let dx = -2; dx <= 2; dx++) {
+      const xx = x + dx;
+      if (xx < 0 || xx >= width) continue;
+      const j = (yy * width + xx) * 3;
+      const d = Math.max(Math.abs(data[j] - r0), Math.abs(data[j + 1] - g0), Math.abs(data[j + 2] - b0));
+      if (d > far) far = d;
+      if (d > near && dx >= -1 && dx <= 1 && dy >= -1 && dy <= 1) near = d;
+    }
+  }
+  out[0][i] = near;
+  out[1][i] = far;
 }
 
 /** CIE 15:2004 §8.2.1 CIELAB (D65) of one XYZ, written to out[j..j+2]. */
