@@ -6,9 +6,10 @@ import autocannon from 'autocannon';
 import { openDatabase } from '../db/open';
 import { seedDemo } from '../scripts/seed/seed-demo';
 import { healthUnderMeasure, type HealthUnderMeasure } from './health-under-measure';
+import { type MeasureHttpResult, runMeasureOverHttp } from './measure-http';
 import { type ReadLoad, runReadLoad } from './read-load';
 
-export type LoadResult = { reads: ReadLoad; health: HealthUnderMeasure; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
+export type LoadResult = { reads: ReadLoad; health: HealthUnderMeasure; measureHttp: MeasureHttpResult; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
 
 // POST /api/delta-e under load against `next start` (production build in
 // .next, built by the caller), 10 s with 32 connections, as a signed-in member.
@@ -46,10 +47,12 @@ export async function runDeltaELoad(root: string, port = 3199, seconds = 10): Pr
     });
     const reads = await runReadLoad(base, cookie);
     const refusals = await timeRefusals(base, cookie);
+    const measureHttp = await runMeasureOverHttp(base, cookie);
     const health = await healthUnderMeasure(base);
     return {
       reads,
       health,
+      measureHttp,
       refusals,
       rps: result.requests.average,
       p50: result.latency.p50,

@@ -14,6 +14,7 @@ export { fitFlakeRate, type FlakeObservation, type FlakeRate } from './fitFlakeR
 export { flakeDoseForCoverage } from './flakeDoseForCoverage';
 export { adviseFlake, FLAKE_TOLERANCE, type FlakeAdvice } from './adviseFlake';
 export { invertMat3 } from './invertMat3';
+export { kthSmallest } from './kthSmallest';
 export { labDifference, type LabDifference } from './labDifference';
 export { labToHex } from './labToHex';
 export { labToXyz } from './labToXyz';

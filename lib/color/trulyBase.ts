@@ -1,6 +1,7 @@
 import type { Lab, Vec3 } from './types';
 import { boxMorphology } from './boxMorphology';
 import { cie94Distances } from './cie94Distances';
+import { kthSmallest } from './kthSmallest';
 import type { RegionPixels } from './regionPixels';
 
 const CONVERGED = 0.01; // ΔE*ab: far below anything visible or reported
@@ -54,8 +55,7 @@ export function trulyBase({ lab, xyz, kept, glare, rp, start, keepWithin, radius
     const dl = lab[i * 3] - lab[j * 3], da = lab[i * 3 + 1] - lab[j * 3 + 1], db = lab[i * 3 + 2] - lab[j * 3 + 2];
     diffs[nd++] = Math.sqrt(dl * dl + da * da + db * db);
   }
-  const sorted = diffs.subarray(0, nd).sort();
-  const sigma = nd ? sorted[Math.floor(nd / 4)] / (CHI3_Q25 * Math.SQRT2) : keepWithin / MODE_SIGMAS;
+  const sigma = nd ? kthSmallest(diffs.subarray(0, nd), Math.floor(nd / 4)) / (CHI3_Q25 * Math.SQRT2) : keepWithin / MODE_SIGMAS;
   const window = Math.min(keepWithin, Math.max(MODE_MIN, MODE_SIGMAS * sigma));
   const dist = new Float32Array(n);
   let centre = start;

@@ -49,11 +49,12 @@ export interface PhotoMeasure {
 
 export interface MeasureOptions {
   /**
-   * Regions with more pixels than this are measured on a regular lattice sample (every n-th pixel
-   * of every n-th row, n = ceil(sqrt(pixels / maxSamples))). Fifteen thousand samples leave the
-   * sampling error far below the figures reported: lattice points several pixels apart carry
-   * independent noise, so the mean of 15 000 moves by under 1 % of their scatter, and a coverage
-   * of 10 % is counted to ±0.25 % (one standard error, binomial); the ± counts them as such
+   * Regions of four times this many pixels or more are measured on a regular lattice sample
+   * (every n-th pixel of every n-th row, n = floor(sqrt(pixels / maxSamples)), so at least
+   * maxSamples and under four times as many; smaller regions in every pixel). Ten thousand samples
+   * leave the sampling error far below the figures reported: lattice points several pixels apart
+   * carry independent noise, so their mean moves by 1 % of their scatter, and a coverage of 10 % is
+   * counted to ±0.3 % (one standard error, binomial); the ± counts them as such
    * (regionUncertainty). tests/color/samples.test.ts compares the default lattice with every
    * pixel on a realistic 1600 × 1200 photo. `pixels` still counts the whole region and `kept` is
    * scaled to it. Infinity measures every pixel.
@@ -61,7 +62,7 @@ export interface MeasureOptions {
   maxSamples?: number;
 }
 
-export const DEFAULT_MAX_SAMPLES = 15_000;
+export const DEFAULT_MAX_SAMPLES = 10_000;
 /**
  * A region whose two card corrections (whiteBalanceFromCard) differ by more than this (ΔE00) gets
  * the warning: either could be the truth, so the reading may be off by about this much. Ours: the
@@ -75,7 +76,7 @@ export const LIGHT_AMBIGUITY_WARNING = 2;
 function sampleRegion(window: PixelWindow, spans: Int32Array, toXyz: Mat3, profile: RgbProfile, maxSamples: number): RegionPixels {
   let n = 0;
   for (let s = 0; s < spans.length; s += 3) n += spans[s + 2] - spans[s + 1];
-  const step = n > maxSamples ? Math.ceil(Math.sqrt(n / maxSamples)) : 1;
+  const step = Math.max(1, Math.floor(Math.sqrt(n / maxSamples)));
   const rp = regionPixels(window, spans, toXyz, step, profile.linear);
   return rp.samples.total > 0 || step === 1 ? rp : regionPixels(window, spans, toXyz, 1, profile.linear);
 }
