@@ -2,6 +2,7 @@
 export type * from './types';
 export { applyMat3 } from './applyMat3';
 export { bandFor } from './bandFor';
+export { blackClippedShare } from './blackClippedShare';
 export { bradfordAdapt } from './bradfordAdapt';
 export { BRADFORD, BRADFORD_INVERSE, bradfordMatrix } from './bradfordMatrix';
 export { BLEND_RESIDUAL, BLEND_T, clusterFlake, FLAKE_MERGE_DE00, FLAKE_MIN_SHARE, MAX_FLAKE_GROUPS } from './clusterFlake';

@@ -1,4 +1,5 @@
 import {
+  blackClippedShare,
   castAmbiguity,
   type Lab,
   type Mat3,
@@ -70,6 +71,8 @@ export const DEFAULT_MAX_SAMPLES = 10_000;
  * noise and compression on top (tests/color/realPhotos.test.ts).
  */
 export const LIGHT_AMBIGUITY_WARNING = 2;
+/** A region with at least this share of its pixels clipped to black in a channel gets a warning (ours). */
+export const BLACK_CLIP_WARNING = 0.2;
 
 // The region's pixels, on a lattice when it holds more than maxSamples pixels (every pixel when
 // the lattice would miss a thin region altogether).
@@ -120,13 +123,19 @@ export async function measurePhoto(
   }
   // JPEG: how coarse its quantisation was (jpegQuantScale); WebP may be lossy: counted as a mid JPEG.
   const compression = header.format === 'png' ? 0 : header.format === 'jpeg' ? (jpegQuantScale(buf) ?? 0.5) : 0.5;
-  const measured = regions.map((r, i) => ({
-    name: r.name,
-    ...measureRegion(sampleRegion(window, spans[i], toXyz, profile, maxSamples), { compression, otherLight: card?.otherFromFirst }),
-  }));
+  const clippedBlack: string[] = [];
+  const measured = regions.map((r, i) => {
+    const rp = sampleRegion(window, spans[i], toXyz, profile, maxSamples);
+    if (blackClippedShare(rp.samples) >= BLACK_CLIP_WARNING) clippedBlack.push(r.name);
+    return { name: r.name, ...measureRegion(rp, { compression, otherLight: card?.otherFromFirst }) };
+  });
+  const clipWarning = clippedBlack.length
+    ? `A colour channel is clipped to black in ${clippedBlack.map((n) => `"${n}"`).join(', ')}: the camera lost part of ${clippedBlack.length > 1 ? 'their' : 'its'} colour, and no correction brings it back. Reshoot under daylight-balanced light, a little brighter.`
+    : null;
+  const warning = [card ? lightWarning(measured, card) : null, clipWarning].filter((w) => w !== null).join(' ') || null;
   const whiteBalance: PhotoMeasure['whiteBalance'] = card
-    ? { applied: true, method: 'channel', neutralLab: card.neutralLab, cast: card.cast, warning: lightWarning(measured, card) }
-    : { applied: false, method: 'none', cast: 0, warning: null };
+    ? { applied: true, method: 'channel', neutralLab: card.neutralLab, cast: card.cast, warning }
+    : { applied: false, method: 'none', cast: 0, warning };
   return { width, height, whiteBalance, regions: measured };
 }
 
