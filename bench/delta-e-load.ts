@@ -8,12 +8,16 @@ import { seedDemo } from '../scripts/seed/seed-demo';
 import { healthUnderMeasure, type HealthUnderMeasure } from './health-under-measure';
 import { type MeasureHttpResult, runMeasureOverHttp } from './measure-http';
 import { type ReadLoad, runReadLoad } from './read-load';
+import { freePort } from '../tests/support/app-process';
 
 export type LoadResult = { reads: ReadLoad; health: HealthUnderMeasure; measureHttp: MeasureHttpResult; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
 
 // POST /api/delta-e under load against `next start` (production build in
 // .next, built by the caller), 10 s with 32 connections, as a signed-in member.
-export async function runDeltaELoad(root: string, port = 3199, seconds = 10): Promise<LoadResult> {
+// A free port of its own (not a fixed one): two checkouts' benches at once would otherwise measure
+// one another's server.
+export async function runDeltaELoad(root: string, port?: number, seconds = 10): Promise<LoadResult> {
+  port ??= await freePort();
   const tmp = fs.mkdtempSync(path.join(os.tmpdir(), 'pourproof-bench-'));
   const dbFile = path.join(tmp, 'bench.db');
   const database = openDatabase(dbFile, { migrate: true });
