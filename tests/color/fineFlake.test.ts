@@ -32,13 +32,13 @@ describe('fine flake (issue 11 table, row 1), JPEG q90', () => {
     expect(median(results.map((r) => r.error))).toBeLessThanOrEqual(0.7);
   });
 
-  // Target ±0.04 on every photo. Held on all but the densest low-contrast cases (20 % blue on
-  // green, 20 % silver on chartreuse read up to ≈ 0.05 off): asserted as ≥ 95 % within ±0.04 and
-  // every photo within ±0.06, so a regression still fails.
-  it('coverage by area within ±0.04 of the true share (≥ 95 % of photos; all within ±0.06)', () => {
+  // Target ±0.04 on every photo. Held on 59 of these 60; one dense low-contrast case (20 % blue
+  // flake) reads ≈ 0.045 off: asserted as ≥ 95 % within ±0.04 and every photo within ±0.05, so a
+  // regression still fails.
+  it('coverage by area within ±0.04 of the true share (≥ 95 % of photos; all within ±0.05)', () => {
     const off = results.map((r) => Math.abs(r.out.regions[0].flake.coverage - r.truth.coverage));
     expect(off.filter((d) => d <= 0.04).length / off.length).toBeGreaterThanOrEqual(0.95);
-    const bad = results.filter((_, k) => off[k] > 0.06).map((r) => `${r.label}: ${r.out.regions[0].flake.coverage.toFixed(3)} vs ${r.truth.coverage.toFixed(3)}`);
+    const bad = results.filter((_, k) => off[k] > 0.05).map((r) => `${r.label}: ${r.out.regions[0].flake.coverage.toFixed(3)} vs ${r.truth.coverage.toFixed(3)}`);
     expect(bad).toEqual([]);
   });
 
