@@ -7,13 +7,18 @@ import { openDatabase } from '../db/open';
 import { seedDemo } from '../scripts/seed/seed-demo';
 import { seedLargeShop, type LargeShop } from './seed-large-shop';
 import { healthUnderMeasure, type HealthUnderMeasure } from './health-under-measure';
+import { type MeasureHttpResult, runMeasureOverHttp } from './measure-http';
 import { type ReadLoad, runReadLoad } from './read-load';
+import { freePort } from '../tests/support/app-process';
 
-export type LoadResult = { large: LargeShop; reads: ReadLoad; health: HealthUnderMeasure; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
+export type LoadResult = { large: LargeShop; reads: ReadLoad; health: HealthUnderMeasure; measureHttp: MeasureHttpResult; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
 
 // POST /api/delta-e under load against `next start` (production build in
 // .next, built by the caller), 10 s with 32 connections, as a signed-in member.
-export async function runDeltaELoad(root: string, port = 3199, seconds = 10): Promise<LoadResult> {
+// A free port of its own (not a fixed one): two checkouts' benches at once would otherwise measure
+// one another's server.
+export async function runDeltaELoad(root: string, port?: number, seconds = 10): Promise<LoadResult> {
+  port ??= await freePort();
   const tmp = fs.mkdtempSync(path.join(os.tmpdir(), 'pourproof-bench-'));
   const dbFile = path.join(tmp, 'bench.db');
   const database = openDatabase(dbFile, { migrate: true });
@@ -48,11 +53,13 @@ export async function runDeltaELoad(root: string, port = 3199, seconds = 10): Pr
     });
     const reads = await runReadLoad(base, cookie);
     const refusals = await timeRefusals(base, cookie);
+    const measureHttp = await runMeasureOverHttp(base, cookie);
     const health = await healthUnderMeasure(base);
     return {
       large,
       reads,
       health,
+      measureHttp,
       refusals,
       rps: result.requests.average,
       p50: result.latency.p50,

@@ -45,9 +45,9 @@ export function findGlareByShape(rp: RegionPixels): Uint8Array {
   const glare = new Uint8Array(n);
   const { lab, counts, size } = rp.samples;
   const chroma = new Float64Array(size);
-  for (let i = 0; i < size; i++) chroma[i] = Math.hypot(lab[i * 3 + 1], lab[i * 3 + 2]);
-  const medL = weightedMedian(lab, counts, -1, 110, 0.05, undefined, 3, 0);
-  const cMax = GLARE_C_RATIO * weightedMedian(chroma, counts, 0, 200, 0.05) + GLARE_C_OFFSET;
+  for (let i = 0; i < size; i++) chroma[i] = Math.sqrt(lab[i * 3 + 1] * lab[i * 3 + 1] + lab[i * 3 + 2] * lab[i * 3 + 2]);
+  const medL = weightedMedian(lab, counts, { range: [-1, 110], step: 0.05, stride: 3, offset: 0 });
+  const cMax = GLARE_C_RATIO * weightedMedian(chroma, counts, { range: [0, 200], step: 0.05 }) + GLARE_C_OFFSET;
   const bright = new Uint8Array(size);
   const washedL = Math.max(medL + GLARE_WASHED_DL, GLARE_WASHED_L);
   for (let i = 0; i < size; i++) {

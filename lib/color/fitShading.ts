@@ -1,3 +1,4 @@
+import { kthSmallest } from './kthSmallest';
 import { solveLinear } from './solveLinear';
 
 /** Rounds of refitting on the pixels the last fit explains. */
@@ -41,26 +42,34 @@ export function fitShading(
   }
   const use = new Uint8Array(k).fill(1);
   const res = new Float64Array(k);
-  const f = new Float64Array(6);
+  const scratch = new Float64Array(k);
   let coef: number[] | null = null;
   for (let round = 0; round <= ROUNDS; round++) {
-    const A = new Float64Array(36);
-    const b = new Float64Array(6);
+    // Normal equations of the six terms 1, u, v, u², uv, v² (the upper triangle, summed as scalars).
+    let s1 = 0, su1 = 0, sv1 = 0, suu = 0, suv = 0, svv = 0, suuu = 0, suuv = 0, suvv = 0, svvv = 0;
+    let suuuu = 0, suuuv = 0, suuvv = 0, suvvv = 0, svvvv = 0;
+    let sy = 0, suy = 0, svy = 0, suuy = 0, suvy = 0, svvy = 0;
     let used = 0;
     for (let j = 0; j < k; j++) {
       if (!use[j]) continue;
       used++;
-      const u = U[j], v = V[j];
-      f[0] = 1; f[1] = u; f[2] = v; f[3] = u * u; f[4] = u * v; f[5] = v * v;
-      for (let p = 0; p < 6; p++) {
-        const fp = f[p];
-        b[p] += fp * Y[j];
-        for (let q = p; q < 6; q++) A[p * 6 + q] += fp * f[q];
-      }
+      const u = U[j], v = V[j], y = Y[j];
+      const uu = u * u, uv = u * v, vv = v * v;
+      s1++; su1 += u; sv1 += v; suu += uu; suv += uv; svv += vv;
+      suuu += uu * u; suuv += uu * v; suvv += u * vv; svvv += vv * v;
+      suuuu += uu * uu; suuuv += uu * uv; suuvv += uu * vv; suvvv += uv * vv; svvvv += vv * vv;
+      sy += y; suy += u * y; svy += v * y; suuy += uu * y; suvy += uv * y; svvy += vv * y;
     }
     if (used < 30) break;
-    const rows = Array.from({ length: 6 }, (_, p) => Array.from({ length: 6 }, (_, q) => (q >= p ? A[p * 6 + q] : A[q * 6 + p])));
-    const next = solveLinear(rows, Array.from(b));
+    const rows = [
+      [s1, su1, sv1, suu, suv, svv],
+      [su1, suu, suv, suuu, suuv, suvv],
+      [sv1, suv, svv, suuv, suvv, svvv],
+      [suu, suuu, suuv, suuuu, suuuv, suuvv],
+      [suv, suuv, suvv, suuuv, suuvv, suvvv],
+      [svv, suvv, svvv, suuvv, suvvv, svvvv],
+    ];
+    const next = solveLinear(rows, [sy, suy, svy, suuy, suvy, svvy]);
     if (!next) break;
     coef = next;
     if (round === ROUNDS) break;
@@ -69,8 +78,7 @@ export function fitShading(
       const u = U[j], v = V[j];
       res[j] = Math.abs(Y[j] - (c0 + c1 * u + c2 * v + c3 * u * u + c4 * u * v + c5 * v * v));
     }
-    const sorted = res.slice().sort();
-    const cut = Math.max(MIN_CUT, CUT_SIGMAS * 1.4826 * sorted[Math.floor(k / 2)]);
+    const cut = Math.max(MIN_CUT, CUT_SIGMAS * 1.4826 * kthSmallest(res, k >> 1, scratch));
     for (let j = 0; j < k; j++) use[j] = res[j] <= cut ? 1 : 0;
   }
   if (!coef) return null;

@@ -30,6 +30,12 @@ export interface RegionPixels {
   step: number;
   cell: Int32Array;
   sample: Int32Array;
+  /**
+   * On a lattice (step > 1): per sampled pixel, the largest difference of 8-bit code (any
+   * channel) to a full-resolution neighbour within 1 pixel and within 2 (roughness: the rows either side only), so
+   * that a sample can tell whether it sits beside a speck the lattice does not see. Null for every pixel.
+   */
+  rough: [Uint8Array, Uint8Array] | null;
 }
 
 /**
@@ -71,6 +77,8 @@ export function regionPixels(
   const counts = new Uint32Array(1 << bits);
   const mask = keys.length - 1, shift = 32 - bits;
   let size = 0, n = 0;
+  const xs = step > 1 ? new Int32Array(area) : null;
+  const ys = step > 1 ? new Int32Array(area) : null;
   for (let s = 0; s < spans.length; s += 3) {
     const y = spans[s];
     if (y % step !== 0) continue;
@@ -91,6 +99,10 @@ export function regionPixels(
       }
       counts[h]++;
       cell[n] = rowCell + x / step;
+      if (xs) {
+        xs[n] = x;
+        ys![n] = y;
+      }
       slot[n++] = h;
     }
   }
@@ -109,6 +121,7 @@ export function regionPixels(
   }
   const sample = new Int32Array(area);
   for (let i = 0; i < n; i++) sample[i] = id[slot[i]];
+  const rough = xs && ys ? roughness(window, xs, ys, n) : null;
 
   const xyz = new Float64Array(size * 3);
   const lab = new Float64Array(size * 3);
@@ -130,7 +143,48 @@ export function regionPixels(
     // Neutral input stays exactly neutral, as in culori (floating-point residue otherwise).
     if (srgbNeutral && R === G && G === B) lab[j + 1] = lab[j + 2] = 0;
   }
-  return { samples: { rgb, lab, counts: outCounts, size, total: n, pixels }, xyz, clipped, gridW, gridH, step, cell, sample };
+  return { samples: { rgb, lab, counts: outCounts, size, total: n, pixels }, xyz, clipped, gridW, gridH, step, cell, sample, rough };
+}
+
+// Largest |Δcode| from a pixel of the window to its neighbours: the 3 × 3 square (within 1
+// pixel), then out to 2 pixels along its own and the adjacent rows (a 5 × 3 block). Rows two away
+// are left out: on a lattice each row touched is a fresh stretch of memory, and a speck that
+// close is mostly caught by the rows either side (the lens spreads it).
+const RING: [number, number][] = [];
+for (let dy = -1; dy <= 1; dy++) for (let dx = -1; dx <= 1; dx++) if (dx || dy) RING.push([dx, dy]);
+for (let dy = -1; dy <= 1; dy++) for (const dx of [-2, 2]) RING.push([dx, dy]);
+const INNER = 8;
+
+function roughness(window: PixelWindow, xs: Int32Array, ys: Int32Array, n: number): [Uint8Array, Uint8Array] {
+  const { data, width, height, left, top } = window;
+  const near = new Uint8Array(n), far = new Uint8Array(n);
+  const offs = Int32Array.from(RING, ([dx, dy]) => (dy * width + dx) * 3);
+  for (let i = 0; i < n; i++) {
+    const x = xs[i] - left, y = ys[i] - top;
+    const c = (y * width + x) * 3;
+    const r0 = data[c], g0 = data[c + 1], b0 = data[c + 2];
+    const inside = x >= 2 && y >= 1 && x < width - 2 && y < height - 1;
+    let worst = 0;
+    for (let k = 0; k < offs.length; k++) {
+      if (k === INNER) near[i] = worst;
+      if (!inside) {
+        const xx = x + RING[k][0], yy = y + RING[k][1];
+        if (xx < 0 || xx >= width || yy < 0 || yy >= height) continue;
+      }
+      const j = c + offs[k];
+      let d = data[j] - r0;
+      if (d < 0) d = -d;
+      if (d > worst) worst = d;
+      d = data[j + 1] - g0;
+      if (d < 0) d = -d;
+      if (d > worst) worst = d;
+      d = data[j + 2] - b0;
+      if (d < 0) d = -d;
+      if (d > worst) worst = d;
+    }
+    far[i] = worst;
+  }
+  return [near, far];
 }
 
 /** CIE 15:2004 §8.2.1 CIELAB (D65) of one XYZ, written to out[j..j+2]. */

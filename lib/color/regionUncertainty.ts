@@ -17,9 +17,6 @@ export const U_PER_FLAKE = 0.02;
 export const U_PER_FLAKE_COMPRESSED = 0.12;
 /** When a second colour was cut out of the region. */
 export const U_OTHER = 0.2;
-/** Per ΔE00 of the card's cast: adapting the light is a model (see correctWhiteBalance); a channel
- * cast corrected as Bradford is left off by up to about half the card's cast. */
-export const U_PER_CAST = 0.2;
 /** Neighbouring pixels are not independent after demosaicing, blur and JPEG: count one in this many. */
 export const CORRELATED_PIXELS = 9;
 /** Coverage factor for about 95 % (JCGM 100:2008 §6.2–6.3). */
@@ -28,8 +25,10 @@ export const K = 2;
 export interface UncertaintyInputs {
   /** Median ΔE00 of the kept pixels to the base. */
   spread: number;
-  /** Pixels the base was averaged from. */
+  /** Sampled pixels the base was averaged from. */
   basePixels: number;
+  /** Pixels between lattice samples (1 = every pixel): samples this far apart are independent. */
+  step?: number;
   /** 0 lossless, else the JPEG quantisation scale. */
   compression: number;
   shading: number;
@@ -37,7 +36,8 @@ export interface UncertaintyInputs {
   flake: Lab[];
   base: Lab;
   other: number;
-  cast: number;
+  /** ΔE00 between the two corrections the grey card allows (castAmbiguity; 0 without a card). */
+  lightModel: number;
 }
 
 /**
@@ -49,7 +49,10 @@ export interface UncertaintyInputs {
  * and the light correction.
  */
 export function regionUncertainty(x: UncertaintyInputs): number {
-  const nEff = Math.max(1, x.basePixels / CORRELATED_PIXELS);
+  // Neighbours share their noise (one in CORRELATED_PIXELS counts); lattice samples 3 or more
+  // pixels apart do not, so each counts once.
+  const step = x.step ?? 1;
+  const nEff = Math.max(1, (x.basePixels * Math.min(step * step, CORRELATED_PIXELS)) / CORRELATED_PIXELS);
   const scatter = (1.4826 * x.spread) / Math.sqrt(nEff);
   const flakeDistance = x.flake.reduce((m, f) => Math.max(m, deltaE2000(x.base, f)), 0);
   const parts = [
@@ -58,7 +61,9 @@ export function regionUncertainty(x: UncertaintyInputs): number {
     U_PER_SHADING * x.shading,
     (U_PER_FLAKE + U_PER_FLAKE_COMPRESSED * x.compression) * x.coverage * flakeDistance,
     x.other > 0 ? U_OTHER : 0,
-    U_PER_CAST * x.cast,
+    // The truth lies between the two readings: a rectangular distribution of half-width D about
+    // the one reported, u = D/√3 (JCGM 100:2008 §4.3.7).
+    x.lightModel / Math.sqrt(3),
   ];
   return K * Math.sqrt(parts.reduce((s, u) => s + u * u, 0));
 }

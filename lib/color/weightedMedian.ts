@@ -1,20 +1,23 @@
+export interface WeightedMedianOptions {
+  /** Values are clamped to [lo, hi]. */
+  range: [number, number];
+  /** Width of the histogram's bins (the result is exact whatever it is; it sets the speed). */
+  step: number;
+  /** Only samples with include[i] !== 0 count (all when omitted). */
+  include?: Uint8Array;
+  /** The value of sample i is values[i·stride + offset] (interleaved channels). */
+  stride?: number;
+  offset?: number;
+}
+
 /**
- * Count-weighted median of values[i·stride + offset] over the samples with include[i] !== 0 (all
- * when include is omitted): the smallest value whose cumulative weight reaches half the total.
- * Values are clamped to [lo, hi]. A histogram with bins of `step` finds the bin holding the middle
- * weight in O(n + bins); the values in that bin are then sorted, so the result is exact.
- * NaN when nothing is included.
+ * Count-weighted median of the samples' values: the smallest value whose cumulative weight reaches
+ * half the total. A histogram with bins of `step` finds the bin holding the middle weight in
+ * O(n + bins); the values in that bin are then sorted, so the result is exact. NaN when nothing
+ * is included.
  */
-export function weightedMedian(
-  values: Float64Array,
-  weights: Uint32Array,
-  lo: number,
-  hi: number,
-  step: number,
-  include?: Uint8Array,
-  stride = 1,
-  offset = 0,
-): number {
+export function weightedMedian(values: Float64Array, weights: Uint32Array, options: WeightedMedianOptions): number {
+  const { range: [lo, hi], step, include, stride = 1, offset = 0 } = options;
   const n = weights.length;
   const bins = Math.ceil((hi - lo) / step) + 1;
   const hist = new Float64Array(bins);

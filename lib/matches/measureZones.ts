@@ -4,7 +4,8 @@ import type { DB } from '@/db/open';
 import { photos } from '@/db/schema';
 import { compareLab, type Lab, type RegionMeasure, type Shape } from '@/lib/color';
 import { ApiError } from '@/lib/http/api';
-import { ImageError, type NeutralPatch, type PhotoMeasure } from '@/lib/image';
+import { imageApiError } from '@/lib/http/imageApiError';
+import type { NeutralPatch, PhotoMeasure } from '@/lib/image';
 import { measureOffThread } from '@/lib/image/measurePool';
 import { fetchStoredBytes } from '@/lib/uploads/service';
 
@@ -35,8 +36,7 @@ export async function measureZones(database: DB, teamId: string, photoId: string
   try {
     measured = await measureOffThread(bytes, regions, neutral);
   } catch (err) {
-    if (err instanceof ImageError) throw new ApiError(err.status, err.kind, err.message.replace(REF, 'the reference of '));
-    throw err;
+    throw imageApiError(err, (m) => m.replace(REF, 'the reference of '));
   }
   const references: Record<string, RegionMeasure> = {};
   for (const r of measured.regions) if (r.name.startsWith(REF)) references[r.name.slice(REF.length)] = r;

@@ -1,6 +1,7 @@
 import 'server-only';
 import sharp from 'sharp';
 import { ApiError } from '@/lib/http/api';
+import { imageApiError } from '@/lib/http/imageApiError';
 import { heifKind, ImageError, type ImageHeader, inspectImage } from '@/lib/image';
 import { HEIC_MESSAGE, MAX_PHOTO_BYTES, MAX_PHOTO_PIXELS, PHOTO_FORMATS, type PhotoFormat, TOO_LARGE_MESSAGE, WRONG_TYPE_MESSAGE } from './limits';
 
@@ -39,8 +40,7 @@ export async function inspectPhoto(buf: Buffer): Promise<InspectedPhoto> {
     if (err instanceof ImageError && err.kind === 'unsupported_type') {
       throw new ApiError(415, 'undecodable', `This ${sniffed.toUpperCase()} file could not be read; it may be damaged. Export it again and upload that.`);
     }
-    if (err instanceof ImageError) throw new ApiError(err.status, err.kind, err.message);
-    throw err;
+    throw imageApiError(err);
   }
   if (header.format !== sniffed) {
     throw new ApiError(415, 'unsupported_type', `This file is not a readable JPEG, PNG or WebP image. ${WRONG_TYPE_MESSAGE}`);

@@ -7,7 +7,10 @@ import {
   BRADFORD_INVERSE,
   bradfordAdapt,
   bradfordMatrix,
+  castAmbiguity,
   correctWhiteBalance,
+  invertMat3,
+  labToXyz,
   D50,
   D50_CIE15,
   D65,
@@ -104,5 +107,40 @@ describe('correctWhiteBalance', () => {
 
   it('refuses a patch that is black in a channel', () => {
     expect(() => correctWhiteBalance([0.2, 0.2, 0])).toThrow(RangeError);
+  });
+});
+
+describe("correctWhiteBalance 'channel' (a per-channel scale of the photo's linear RGB)", () => {
+  const scene: Vec3[] = [[0.2, 0.2, 0.2], [0.6, 0.15, 0.02], [0.05, 0.3, 0.1], [0.1, 0.1, 0.5]];
+  const gain: Vec3 = [2.2, 1, 0.28]; // a strong warm camera gain error, channels of linear sRGB
+
+  it('undoes a camera gain error exactly on every colour, not only on the card', () => {
+    const photo = scene.map((v) => v.map((c, k) => c * gain[k] * 0.45) as Vec3);
+    const wb = correctWhiteBalance(photo[0], 116 * Math.cbrt(0.2) - 16, SRGB_TO_XYZ, 'channel');
+    expect(wb.method).toBe('channel');
+    scene.forEach((v, i) => closeVec(applyMat3(wb.toXyz, photo[i]), applyMat3(SRGB_TO_XYZ, v), 1e-12));
+  });
+
+  it("and Bradford's correction of the same card leaves saturated colours off: castAmbiguity measures by how much", () => {
+    const photo = scene.map((v) => v.map((c, k) => c * gain[k]) as Vec3);
+    const ch = correctWhiteBalance(photo[0], undefined, SRGB_TO_XYZ, 'channel');
+    const bf = correctWhiteBalance(photo[0], undefined, SRGB_TO_XYZ, 'bradford');
+    const otherFromFirst = multiplyMat3(bf.toXyz, invertMat3(ch.toXyz));
+    // The card itself reads the same under both.
+    expect(castAmbiguity(xyzToLab(applyMat3(ch.toXyz, photo[0])), otherFromFirst).dE00).toBeLessThan(1e-9);
+    for (const v of photo.slice(1)) {
+      const first = xyzToLab(applyMat3(ch.toXyz, v));
+      const { lab, dE00 } = castAmbiguity(first, otherFromFirst);
+      closeVec([lab.l, lab.a, lab.b], Object.values(xyzToLab(applyMat3(bf.toXyz, v))), 1e-9);
+      expect(dE00).toBeGreaterThan(1);
+    }
+  });
+});
+
+describe('labToXyz', () => {
+  it('inverts xyzToLab (CIE 15:2004 §8.2.1) on both branches to 1e-12', () => {
+    for (const xyz of [[0.3, 0.25, 0.1], [0.004, 0.003, 0.006], [0.95, 1, 1.09], [0.5, 0.2, 0.001]] as Vec3[]) {
+      closeVec(labToXyz(xyzToLab(xyz)), xyz, 1e-12);
+    }
   });
 });

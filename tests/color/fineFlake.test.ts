@@ -32,13 +32,13 @@ describe('fine flake (issue 11 table, row 1), JPEG q90', () => {
     expect(median(results.map((r) => r.error))).toBeLessThanOrEqual(0.7);
   });
 
-  // Target ±0.04 on every photo. Held on all but the densest low-contrast cases (20 % blue on
-  // green, 20 % silver on chartreuse read up to ≈ 0.05 off): asserted as ≥ 95 % within ±0.04 and
-  // every photo within ±0.06, so a regression still fails.
-  it('coverage by area within ±0.04 of the true share (≥ 95 % of photos; all within ±0.06)', () => {
+  // Target ±0.04 on every photo. Held on 59 of these 60; one dense low-contrast case (20 % blue
+  // flake) reads ≈ 0.045 off: asserted as ≥ 95 % within ±0.04 and every photo within ±0.05, so a
+  // regression still fails.
+  it('coverage by area within ±0.04 of the true share (≥ 95 % of photos; all within ±0.05)', () => {
     const off = results.map((r) => Math.abs(r.out.regions[0].flake.coverage - r.truth.coverage));
     expect(off.filter((d) => d <= 0.04).length / off.length).toBeGreaterThanOrEqual(0.95);
-    const bad = results.filter((_, k) => off[k] > 0.06).map((r) => `${r.label}: ${r.out.regions[0].flake.coverage.toFixed(3)} vs ${r.truth.coverage.toFixed(3)}`);
+    const bad = results.filter((_, k) => off[k] > 0.05).map((r) => `${r.label}: ${r.out.regions[0].flake.coverage.toFixed(3)} vs ${r.truth.coverage.toFixed(3)}`);
     expect(bad).toEqual([]);
   });
 
@@ -57,10 +57,13 @@ describe('fine flake (issue 11 table, row 1), JPEG q90', () => {
   });
 });
 
-// JPEG q75 keeps much less of the fine chroma (4:2:0 and coarser quantisation). Known limits: on
-// the dark blue base 20 % blue or silver flake moves the base by up to ≈ 1.8; coverage misses
-// ±0.04 on about one photo in six (blue on blue ≈ 0.1 low, 5 % silver on green ≈ 0.11 high).
-// Checked at base ≤ 2.0 (median ≤ 0.7), ≥ 80 % of coverages within ±0.04 and all within ±0.12,
+// JPEG q75 keeps much less of the fine chroma (4:2:0 and coarser quantisation): a 1–3 px speck's
+// chroma is spread over its neighbours while its lightness stays put, so no pixel shows the pure
+// flake colour. Known limits: on the dark blue base 20 % blue or silver flake moves the base by up
+// to ≈ 1.8 (the chroma of the base pixels themselves is tinted); blue on blue is low-contrast and
+// reads ≈ 0.1 low in coverage, sparse blue on the pale bubblegum ≈ 0.07 high. Silver that sparkles
+// (specks of different brightness) is unmixed against its mean colour, not its brightest specks.
+// Checked at base ≤ 2.0 (median 0.7), ≥ 85 % of coverages within ±0.04 and all within ±0.10,
 // so that it cannot get worse unnoticed.
 describe('fine flake at JPEG q75', () => {
   const q75: Outcome[] = [];
@@ -77,8 +80,8 @@ describe('fine flake at JPEG q75', () => {
     expect(median(q75.map((r) => r.error))).toBeLessThanOrEqual(0.7);
     expect(q75.filter((r) => r.out.regions[0].glare > 0.02).map((r) => r.label)).toEqual([]);
     const off = q75.map((r) => Math.abs(r.out.regions[0].flake.coverage - r.truth.coverage));
-    expect(off.filter((d) => d <= 0.04).length / off.length).toBeGreaterThanOrEqual(0.8);
-    expect(q75.filter((_, k) => off[k] > 0.12).map((r) => r.label)).toEqual([]);
+    expect(off.filter((d) => d <= 0.04).length / off.length).toBeGreaterThanOrEqual(0.85);
+    expect(q75.filter((_, k) => off[k] > 0.1).map((r) => r.label)).toEqual([]);
     expect(covered(q75)).toBeGreaterThanOrEqual(0.9);
   });
 });

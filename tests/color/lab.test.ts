@@ -1,7 +1,7 @@
 import Color from 'colorjs.io';
 import { converter } from 'culori';
 import { describe, expect, it } from 'vitest';
-import { D65, packedRgbToLab, SRGB_TO_XYZ, srgbToLab, srgbToLinear, xyzToLab } from '@/lib/color';
+import { D65, regionPixels, shapeSpans, SRGB_TO_XYZ, srgbToLab, srgbToLinear, xyzToLab } from '@/lib/color';
 
 const toLab65 = converter('lab65');
 
@@ -94,10 +94,13 @@ describe('sRGB → CIELAB D65', () => {
     for (let r = 0; r < steps; r++)
       for (let g = 0; g < steps; g++)
         for (let b = 0; b < steps; b++) rgb.set([Math.min(255, r * 16), Math.min(255, g * 16), Math.min(255, b * 16)], 3 * n++);
-    const lab = packedRgbToLab(rgb, n);
+    // One row of pixels, read the way a region is (regionPixels: distinct colours, one conversion each).
+    const { samples } = regionPixels({ data: rgb, left: 0, top: 0, width: n, height: 1 }, shapeSpans({ type: 'rect', x: 0, y: 0, w: 1, h: 1 }, n, 1));
+    expect(samples.size).toBe(n);
+    const lab = samples.lab;
     let worst = 0;
-    for (let i = 0; i < n; i++) {
-      const c = toLab65({ mode: 'rgb', r: rgb[3 * i] / 255, g: rgb[3 * i + 1] / 255, b: rgb[3 * i + 2] / 255 });
+    for (let i = 0; i < samples.size; i++) {
+      const c = toLab65({ mode: 'rgb', r: samples.rgb[3 * i] / 255, g: samples.rgb[3 * i + 1] / 255, b: samples.rgb[3 * i + 2] / 255 });
       worst = Math.max(worst, Math.abs(lab[3 * i] - c.l), Math.abs(lab[3 * i + 1] - c.a), Math.abs(lab[3 * i + 2] - c.b));
     }
     expect(worst).toBeLessThan(1e-9);

@@ -5,7 +5,7 @@ import { converter } from 'culori';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { deltaE2000 } from '@/lib/color';
 import { measurePhoto } from '@/lib/image';
-import { colourAtDistance, LIGHTS, type Light, makePhoto, meteredExposure } from '../support/photoGen';
+import { castMatrix, colourAtDistance, labToLin, LIGHTS, type Light, makePhoto, meteredExposure } from '../support/photoGen';
 import { BASES, covered, measureSpec, median, type Outcome } from '../support/photoCases';
 
 describe('shading ±15–25 % (issue 11 table, row 2)', () => {
@@ -68,13 +68,17 @@ describe('laminate line, region 0–24 px over (issue 11 table, row 3)', () => {
 });
 
 describe('casts with the grey card, both kinds (issue 11 table, row 4)', () => {
-  const out: (Outcome & { light: Light; kind: string })[] = [];
+  const out: (Outcome & { light: Light; kind: string; belowBlack: boolean })[] = [];
   beforeAll(async () => {
     let seed = 1100;
     for (const light of ['tungsten', 'shade', 'fluorescent', 'green fluorescent'] as Light[])
       for (const kind of ['channel', 'bradford'] as const)
-        for (const base of Object.values(BASES))
-          out.push({ ...(await measureSpec(`${kind} ${light}`, { seed: seed++, base, cast: { light, kind }, exposure: meteredExposure(light, kind), cardL: 60, blur: 0.6, format: 'jpeg90' })), light, kind });
+        for (const [name, base] of Object.entries(BASES)) {
+          // Whether the cast pushes a channel of the base below what a camera records (it then clips).
+          const m = castMatrix(light, kind), v = labToLin(base);
+          const belowBlack = m.some((row) => row[0] * v[0] + row[1] * v[1] + row[2] * v[2] < 0);
+          out.push({ ...(await measureSpec(`${kind} ${light} ${name}`, { seed: seed++, base, cast: { light, kind }, exposure: meteredExposure(light, kind), cardL: 60, blur: 0.6, format: 'jpeg90' })), light, kind, belowBlack });
+        }
   }, 300_000);
 
   it('median ΔE00 ≤ 1.0 and worst ≤ 2.5 where no warning is given; a warning wherever worse', () => {
@@ -83,6 +87,25 @@ describe('casts with the grey card, both kinds (issue 11 table, row 4)', () => {
     expect(unwarned.filter((o) => o.error > 2.5).map((o) => `${o.label}: ${o.error.toFixed(2)}`)).toEqual([]);
     // Daylight shade is a mild cast: it is corrected without a warning.
     expect(out.filter((o) => o.light === 'shade').every((o) => !o.out.whiteBalance.warning)).toBe(true);
+    // A cast that scales the camera's channels is undone exactly by the card (within the photo's
+    // own noise and compression), however strong.
+    const channel = out.filter((o) => o.kind === 'channel');
+    expect(channel.filter((o) => o.error > 1.0).map((o) => `${o.label}: ${o.error.toFixed(2)}`)).toEqual([]);
+    for (const o of out) expect(o.out.whiteBalance.method).toBe('channel');
+  });
+
+  it('a channel pushed below black by the cast is reported as clipped, and only there', () => {
+    expect(out.filter((o) => o.belowBlack).length).toBeGreaterThan(0); // tungsten, Bradford-shaped, on the saturated bases
+    for (const o of out) expect(o.out.whiteBalance.warning?.includes('clipped to black') ?? false, o.label).toBe(o.belowBlack);
+  });
+
+  it('the warning names the region and is given only where the card leaves the reading open by more than 2 ΔE00', () => {
+    for (const o of out) {
+      const w = o.out.whiteBalance.warning;
+      if (w) expect(w).toContain('"zone"');
+      // Where no warning is given, the ± of the light correction stays below the warning's level.
+      else expect(o.out.regions[0].uncertainty).toBeLessThanOrEqual(2.5 * 1.2);
+    }
   });
 
   it("reports the card's cast (ΔE00 from grey before correction) and the ± holds in ≥ 90 %", () => {

@@ -1,9 +1,9 @@
 import { z } from 'zod';
 import { requireMember } from '@/lib/auth/current';
-import { ApiError, badRequest, describeZodErrorAt, json, withApi } from '@/lib/http/api';
+import { badRequest, describeZodErrorAt, json, withApi } from '@/lib/http/api';
+import { imageApiError } from '@/lib/http/imageApiError';
 import { formFile, readMultipart } from '@/lib/http/multipart';
 import { assertSameOrigin } from '@/lib/http/origin';
-import { ImageError } from '@/lib/image';
 import { measureOffThread } from '@/lib/image/measurePool';
 import { withMeasureSlot } from '@/lib/http/measureSlots';
 import { MAX_PHOTO_BYTES, TOO_LARGE_MESSAGE } from '@/lib/uploads/limits';
@@ -40,7 +40,6 @@ export const POST = withApi(async (req) => {
   try {
     return json(await withMeasureSlot(member.user.id, () => measureOffThread(bytes, regions, neutral)));
   } catch (err) {
-    if (err instanceof ImageError) throw new ApiError(err.status, err.kind, err.message);
-    throw err;
+    throw imageApiError(err);
   }
 });

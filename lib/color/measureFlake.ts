@@ -1,0 +1,64 @@
+import type { ColorSamples, FlakeGroup, Lab, Vec3 } from './types';
+import { clusterFlake } from './clusterFlake';
+import { flakeEndmembers } from './flakeEndmembers';
+import { labToHex } from './labToHex';
+import { unmixCoverage } from './unmixCoverage';
+
+/** Flake samples farther than this many keep-thresholds from the base are whole flake (core). */
+export const FLAKE_CORE = 2;
+
+export interface FlakeInput {
+  lab: Float32Array;
+  xyz: Float32Array;
+  /** CIE94 distance of each pixel to the base (keepNearBase). */
+  dist: Float32Array;
+  keepWithin: number;
+  /** 1 for pixels that are neither base nor glare; `other` marks the second colour among them. */
+  off: Uint8Array;
+  other: Uint8Array;
+  glare: Uint8Array;
+  base: Lab;
+  /** The base colour in linear XYZ (trulyBase). */
+  bx: Vec3;
+}
+
+/**
+ * Step 6 of measureRegion: the flake is what is neither base, glare nor the second colour. Its
+ * colour groups come from clusterFlake (on the core, clear of blended edges, when there is one),
+ * each group's pure colour from flakeEndmembers, and the area by linear unmixing in linear light
+ * (unmixCoverage) of the summed deviation from the base of every pixel but glare and other: a
+ * pixel that is part flake counts by its part. Returns the area in sampled pixels.
+ */
+export function measureFlake(x: FlakeInput): { area: number; groups: FlakeGroup[] } {
+  const { lab, xyz, dist, keepWithin, off, other, glare, base, bx } = x;
+  const n = off.length;
+  let flakeCount = 0, coreCount = 0;
+  for (let i = 0; i < n; i++) if (off[i] && !other[i]) flakeCount++;
+  const fl = new Float64Array(flakeCount * 3);
+  const core = new Uint8Array(flakeCount);
+  const flakeIdx = new Int32Array(flakeCount);
+  for (let i = 0, k = 0; i < n; i++) {
+    if (!off[i] || other[i]) continue;
+    fl[k * 3] = lab[i * 3]; fl[k * 3 + 1] = lab[i * 3 + 1]; fl[k * 3 + 2] = lab[i * 3 + 2];
+    core[k] = dist[i] > FLAKE_CORE * keepWithin ? 1 : 0;
+    coreCount += core[k];
+    flakeIdx[k++] = i;
+  }
+  if (flakeCount === 0) return { area: 0, groups: [] };
+  const samples: ColorSamples = { rgb: new Uint8Array(0), lab: fl, counts: new Uint32Array(flakeCount).fill(1), size: flakeCount, total: flakeCount, pixels: flakeCount };
+  const clustered = clusterFlake(samples, coreCount > 0 ? core : new Uint8Array(flakeCount).fill(1), base);
+  const ends = flakeEndmembers(clustered.map((g) => g.lab), fl, flakeIdx, xyz, bx);
+
+  const sum: Vec3 = [0, 0, 0];
+  for (let i = 0, j = 0; i < n; i++, j += 3) {
+    if (glare[i] || other[i]) continue;
+    sum[0] += xyz[j] - bx[0]; sum[1] += xyz[j + 1] - bx[1]; sum[2] += xyz[j + 2] - bx[2];
+  }
+  const areas = ends.length ? unmixCoverage(sum, bx, ends.map((e) => e.xyz)) : [];
+  const area = areas.reduce((s, v) => s + v, 0);
+  const groups = ends
+    .map((e, k) => ({ lab: e.lab, hex: labToHex(e.lab), share: area > 0 ? areas[k] / area : 0 }))
+    .filter((g) => g.share > 0)
+    .sort((g, h) => h.share - g.share);
+  return { area, groups };
+}
