@@ -17,6 +17,9 @@ const lab1 = (l: Lab) => formatLab(l);
 
 // The server's measure: the base colour (flake and glare left out) on the
 // grey stage, with the figures beside it.
+// The API's whiteBalance.method in a maker's words.
+const METHOD_WORDS: Record<string, string> = { channel: 'each colour channel scaled', bradford: 'Bradford adaptation' };
+
 export function MeasureReadout({ result }: { result: MeasureResult }) {
   return (
     <div className="space-y-3" aria-label="Measured colour">
@@ -40,7 +43,7 @@ export function MeasureReadout({ result }: { result: MeasureResult }) {
             <dt className="text-ink-soft">Glare</dt><dd>{pct(r.glare)}</dd>
             <dt className="text-ink-soft">Light</dt>
             <dd>
-              {result.whiteBalance.applied ? `corrected from the grey card (${result.whiteBalance.method}; card read ${result.whiteBalance.neutralLab ? lab1(result.whiteBalance.neutralLab) : '—'}${result.whiteBalance.cast !== undefined ? `, ${result.whiteBalance.cast.toFixed(1)} ΔE00 off grey` : ''})` : 'not corrected (no grey card marked)'}
+              {result.whiteBalance.applied ? `corrected from the grey card (${METHOD_WORDS[result.whiteBalance.method] ?? result.whiteBalance.method}; card read ${result.whiteBalance.neutralLab ? lab1(result.whiteBalance.neutralLab) : '—'}${result.whiteBalance.cast !== undefined ? `, ${result.whiteBalance.cast.toFixed(1)} ΔE00 off grey` : ''})` : 'not corrected (no grey card marked)'}
               {result.whiteBalance.warning ? <span role="alert" className="block font-medium text-band-off">{result.whiteBalance.warning}</span> : null}
             </dd>
           </dl>
