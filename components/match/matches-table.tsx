@@ -1,20 +1,16 @@
-'use client';
-
 import {
   type ColumnDef,
   type SortingState,
+  type TableOptionsResolved,
+  createTable,
   flexRender,
   getCoreRowModel,
   getSortedRowModel,
-  useReactTable,
 } from '@tanstack/react-table';
 import Link from 'next/link';
 import { When } from '@/components/ui/when';
-import { useState } from 'react';
 import { BandBadge } from '@/components/color/band-badge';
-import { inputClass } from '@/components/ui/field';
 import type { MatchView } from '@/db/queries/matches';
-import { MATCH_STATUSES } from '@/lib/enums';
 import { bandFor } from '@/lib/color/bandFor';
 import { formatDeltaE } from '@/lib/format';
 import { StatusBadge } from './status-badge';
@@ -69,36 +65,45 @@ function cellClass(id: string, meta: unknown): string {
   return id === 'name' ? 'sticky left-0 z-10 bg-inherit' : '';
 }
 
-// The search and status filter: the server filters (GET /api/matches?q&status).
-export function MatchesFilters({ search, onSearch, status, onStatus }: { search: string; onSearch: (v: string) => void; status: string; onStatus: (v: string) => void }) {
-  return (
-    <div className="mb-3 flex flex-wrap gap-3">
-      <label className="min-w-48 flex-1">
-        <span className="sr-only">Search matches</span>
-        <input type="search" placeholder="Search by name or notes" value={search} onChange={(e) => onSearch(e.target.value)} className={inputClass} />
-      </label>
-      <label className="w-44">
-        <span className="sr-only">Status</span>
-        <select value={status} onChange={(e) => onStatus(e.target.value)} className={inputClass} aria-label="Filter by status">
-          <option value="">All statuses</option>
-          {MATCH_STATUSES.map((s) => <option key={s} value={s}>{s.replace('_', ' ')}</option>)}
-        </select>
-      </label>
-    </div>
-  );
+export const SORTABLE = ['name', 'status', 'pours', 'latest', 'activity', 'maker'] as const;
+export const DEFAULT_SORT: SortingState = [{ id: 'activity', desc: true }];
+
+/** The sort in the address: `name` (A→Z), `-latest` (highest first); nothing is newest activity first. */
+export function parseSort(value: string | undefined): SortingState {
+  if (value === 'none') return [];
+  const id = value?.replace(/^-/, '');
+  if (!id || !(SORTABLE as readonly string[]).includes(id)) return DEFAULT_SORT;
+  return [{ id, desc: value!.startsWith('-') }];
 }
 
-// The loaded matches, sorted in the browser by the column a maker picks.
-export function MatchesTable({ data }: { data: MatchView[] }) {
-  const [sorting, setSorting] = useState<SortingState>([{ id: 'activity', desc: true }]);
-  const table = useReactTable({
+export function sortParam(sorting: SortingState): string | null {
+  const s = sorting[0];
+  if (!s) return 'none';
+  if (s.id === DEFAULT_SORT[0]!.id && s.desc === DEFAULT_SORT[0]!.desc) return null;
+  return `${s.desc ? '-' : ''}${s.id}`;
+}
+
+// TanStack Table's core, run here on the server: the table reaches the phone as HTML, with no
+// table code to download. Sorting a column is a link (the sort rides in the address), so it
+// works before any script has loaded, and Back undoes it.
+function serverTable(data: MatchView[], sorting: SortingState) {
+  const options: TableOptionsResolved<MatchView> = {
     data,
     columns,
-    state: { sorting },
-    onSortingChange: setSorting,
+    state: {},
+    onStateChange: () => {},
+    renderFallbackValue: null,
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
-  });
+  };
+  const table = createTable(options);
+  table.setOptions((prev) => ({ ...prev, state: { ...table.initialState, sorting } }));
+  return table;
+}
+
+// The loaded matches, sorted by the column a maker picks; `hrefFor` gives the address of a sort.
+export function MatchesTable({ data, sorting, hrefFor }: { data: MatchView[]; sorting: SortingState; hrefFor: (sorting: SortingState) => string }) {
+  const table = serverTable(data, sorting);
   return (
     <div className="overflow-x-auto rounded-lg border border-panel-line bg-white">
       <table className="w-full text-left text-sm" aria-label="Matches">
@@ -107,13 +112,15 @@ export function MatchesTable({ data }: { data: MatchView[] }) {
             <tr key={hg.id}>
               {hg.headers.map((h) => {
                 const sorted = h.column.getIsSorted();
+                const next = h.column.getNextSortingOrder();
+                const nextSorting: SortingState = next ? [{ id: h.column.id, desc: next === 'desc' }] : [];
                 return (
                   <th key={h.id} className={`p-0 ${cellClass(h.column.id, h.column.columnDef.meta)}`} aria-sort={sorted ? SORT_ARIA[sorted] : undefined}>
                     {h.column.getCanSort() ? (
-                      <button type="button" onClick={h.column.getToggleSortingHandler()} className="flex min-h-tap w-full items-center gap-1 p-3 text-left font-semibold">
+                      <Link href={hrefFor(nextSorting)} scroll={false} replace className="flex min-h-tap w-full items-center gap-1 p-3 text-left font-semibold">
                         {flexRender(h.column.columnDef.header, h.getContext())}
                         <span aria-hidden className="text-ink-soft">{sorted ? SORT_MARK[sorted] : '↕'}</span>
-                      </button>
+                      </Link>
                     ) : (
                       <span className="block p-3 font-semibold">{flexRender(h.column.columnDef.header, h.getContext())}</span>
                     )}

@@ -8,11 +8,10 @@ const STYLES: Record<Variant, string> = {
   danger: 'border border-band-off/40 bg-white text-band-off hover:bg-band-off/10 disabled:opacity-60',
 };
 
+/** A button's look, for a link that acts as one. */
+export const buttonClass = (variant: Variant = 'primary', className = '') =>
+  `inline-flex min-h-tap items-center justify-center gap-2 rounded-md px-4 font-medium ${STYLES[variant]} ${className}`;
+
 export function Button({ variant = 'primary', className = '', ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
-  return (
-    <button
-      {...props}
-      className={`inline-flex min-h-tap items-center justify-center gap-2 rounded-md px-4 font-medium ${STYLES[variant]} ${className}`}
-    />
-  );
+  return <button {...props} className={buttonClass(variant, className)} />;
 }
