@@ -1,10 +1,13 @@
 'use client';
 
+import dynamic from 'next/dynamic';
 import Link from 'next/link';
 import { usePathname, useRouter } from 'next/navigation';
 import { useEffect, useId, useState } from 'react';
-import { useSignOffQueue } from '@/components/match/signoff-queue';
 import { Wordmark } from './wordmark';
+
+// The sign-off count, for leads and owners only: its code loads when it is shown.
+const QueueBadge = dynamic(() => import('./queue-badge').then((m) => m.QueueBadge));
 
 const LINKS = [
   { href: '/matches', label: 'Matches' },
@@ -33,7 +36,6 @@ export function AppNav({ member, devTools = false }: { member: Member; devTools?
   const setOpen = (v: boolean) => setOpenOn(v ? pathname : null);
   const menuId = useId();
   const decides = member.role === 'lead' || member.role === 'owner';
-  const waiting = useSignOffQueue(decides).data?.length ?? 0;
   useEffect(() => {
     if (!open) return;
     const onKey = (e: KeyboardEvent) => e.key === 'Escape' && setOpenOn(null);
@@ -47,11 +49,7 @@ export function AppNav({ member, devTools = false }: { member: Member; devTools?
     router.refresh();
   }
   const links = devTools ? [...LINKS, { href: '/dev/mailbox', label: 'Mailbox' }] : LINKS;
-  const badge = waiting > 0 ? (
-    <span className="num ml-1.5 inline-flex min-w-6 items-center justify-center rounded-full bg-accent px-1.5 text-sm font-semibold text-white">
-      {waiting}<span className="sr-only"> {waiting === 1 ? 'pour waits' : 'pours wait'} for your sign-off</span>
-    </span>
-  ) : null;
+  const badge = decides ? <QueueBadge /> : null;
   const signOutButton = (
     <button type="button" onClick={signOut} disabled={busy} className="min-h-tap rounded-md border border-panel-line bg-white px-3 font-medium hover:bg-panel">
       Sign out

@@ -22,6 +22,7 @@ describe.runIf(browserAvailable())('browser: the Matches list sorts and filters 
       await page.waitForURL(/[?&]sort=name\b/);
       await expect.poll(names).toEqual([...all].sort((a, b) => a.localeCompare(b)));
       expect(await table.getByRole('columnheader', { name: /^Match/ }).getAttribute('aria-sort')).toBe('ascending');
+      await expect.poll(() => table.getByRole('link', { name: /^Match/ }).getAttribute('href')).toMatch(/sort=-name\b/);
       await table.getByRole('link', { name: /^Match/ }).click();
       await page.waitForURL(/[?&]sort=-name\b/);
       await expect.poll(names).toEqual([...all].sort((a, b) => b.localeCompare(a)));

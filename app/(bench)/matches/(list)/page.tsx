@@ -6,7 +6,7 @@ import { MatchesFilters } from '@/components/match/matches-filters';
 import { MatchesTable, parseSort, sortParam } from '@/components/match/matches-table';
 import { NewMatchButton } from '@/components/match/new-match-button';
 import { buttonClass } from '@/components/ui/button';
-import { SignOffQueue } from '@/components/match/signoff-queue';
+import { LeadQueue } from '@/components/match/lead-queue';
 import { requirePageMember } from '@/lib/auth/current';
 import { roleAtLeast } from '@/lib/auth/roles';
 import { MATCH_STATUSES, type MatchStatus } from '@/lib/enums';
@@ -51,7 +51,7 @@ export default async function MatchesPage({ searchParams }: { searchParams: Sear
     <section>
       <h1 className="text-2xl font-semibold">Matches</h1>
       <p className="mb-4 mt-1 text-ink-soft">Each match is one colour scheme to reproduce; every test pour is kept as a numbered iteration with its ΔE00 per zone.</p>
-      {roleAtLeast(member.role, 'lead') ? <div className="mb-4"><SignOffQueue /></div> : null}
+      {roleAtLeast(member.role, 'lead') ? <div className="mb-4"><LeadQueue /></div> : null}
       <div className="space-y-4">
         {roleAtLeast(member.role, 'maker') ? <NewMatchButton defaultTolerance={settings?.defaultTolerance ?? 2} /> : null}
         {page.items.length === 0 && !filtered ? (
