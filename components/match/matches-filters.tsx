@@ -18,16 +18,20 @@ export function MatchesFilters({ q, status, sort }: { q: string; status: string;
       first.current = false;
       return;
     }
+    // Only a change of the fields moves the address; the sort is read from it as it stands
+    // then (a header may have been pressed meanwhile), and a new filter starts from one page.
     const t = setTimeout(() => {
-      const params = new URLSearchParams();
+      const params = new URLSearchParams(window.location.search);
+      params.delete('shown');
       if (search.trim()) params.set('q', search.trim());
+      else params.delete('q');
       if (state) params.set('status', state);
-      if (sort) params.set('sort', sort);
+      else params.delete('status');
       const qs = params.toString();
       router.replace(qs ? `/matches?${qs}` : '/matches', { scroll: false });
     }, 250);
     return () => clearTimeout(t);
-  }, [search, state, sort, router]);
+  }, [search, state, router]);
   return (
     <form action="/matches" method="get" className="mb-3 flex flex-wrap gap-3" onSubmit={(e) => e.preventDefault()}>
       <label className="min-w-48 flex-1">
