@@ -10,6 +10,7 @@ import { healthUnderMeasure, type HealthUnderMeasure } from './health-under-meas
 import { type MeasureHttpResult, runMeasureOverHttp } from './measure-http';
 import { type ReadLoad, runReadLoad } from './read-load';
 import { freePort } from '../tests/support/app-process';
+import { signInWhenUp } from './fixtures';
 
 export type LoadResult = { large: LargeShop; reads: ReadLoad; health: HealthUnderMeasure; measureHttp: MeasureHttpResult; rps: number; p50: number; p975: number; p99: number; errors: number; non2xx: number; requests: number; refusals: { label: string; status: number; ms: number }[] };
 
@@ -32,17 +33,7 @@ export async function runDeltaELoad(root: string, port?: number, seconds = 10): 
     stdio: 'ignore',
   });
   try {
-    for (let i = 0; i < 120; i++) {
-      const ok = await fetch(`${base}/api/health`).then((r) => r.ok).catch(() => false);
-      if (ok) break;
-      await new Promise((r) => setTimeout(r, 250));
-    }
-    const signIn = await fetch(`${base}/api/auth/sign-in`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json', origin: base },
-      body: JSON.stringify({ email: 'maker@demo.test', password: 'pourproof-demo' }),
-    });
-    const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
+    const cookie = await signInWhenUp(base);
     const result = await autocannon({
       url: `${base}/api/delta-e`,
       method: 'POST',

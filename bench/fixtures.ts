@@ -9,3 +9,17 @@ export async function hugeHeaderPng(): Promise<Buffer> {
   png.writeUInt32BE(crc32(png.subarray(12, 29)) >>> 0, 29);
   return png;
 }
+
+// Waits for `next start` to answer, then signs in as the demo maker: the session cookie.
+export async function signInWhenUp(base: string, tries = 240): Promise<string> {
+  for (let i = 0; i < tries; i++) {
+    if (await fetch(`${base}/api/health`).then((r) => r.ok).catch(() => false)) break;
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  const signIn = await fetch(`${base}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', origin: base },
+    body: JSON.stringify({ email: 'maker@demo.test', password: 'pourproof-demo' }),
+  });
+  return signIn.headers.get('set-cookie')!.split(';')[0]!;
+}

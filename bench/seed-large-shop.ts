@@ -11,6 +11,7 @@ import type { DB } from '../db/open';
 import {
   auditEvents, batches, colorants, matches, memberships, molds, photos, pours, recipeLines, samples, signOffs, teams, users, zones,
 } from '../db/schema';
+import { rng } from '../tests/color/synth';
 
 export const LARGE_SHOP = {
   team: 'Quarrybend Lure Works',
@@ -37,17 +38,6 @@ const MOLD_NAMES = ['Ribbon tail 6 in', 'Creature 4 in', 'Tube 3.5 in', 'Grub 3 
 const WORDS = ['Ashen', 'Bramble', 'Cobble', 'Dapple', 'Ember', 'Fallow', 'Gloam', 'Hollow', 'Ironweed', 'Juniper'];
 const THINGS = ['shad', 'craw', 'minnow', 'leech', 'sculpin', 'frog', 'goby', 'darter', 'nymph', 'perchling'];
 
-// A small seeded generator (mulberry32) so every run builds the same shop.
-function rng(seed: number) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const sampleCommon = { shape: { type: 'rect', x: 0.2, y: 0.3, w: 0.2, h: 0.1 }, pixels: 4000, kept: 3600, spread: 0.8, glare: 0.01, flake: { coverage: 0, groups: [] }, uncertainty: 0.6 };
 

@@ -9,6 +9,7 @@ import { seedDemoPours } from '../scripts/seed/seed-demo-pours';
 import { seedDemoStandard } from '../scripts/seed/seed-demo-standard';
 import { startStandIns } from '../scripts/standins';
 import { measurePageWeights, type PageWeights } from './page-weight';
+import { signInWhenUp } from './fixtures';
 
 /** The goals of issue 14, in kB of compressed JavaScript. */
 export const WEIGHT_GOALS: Record<string, number> = { match: 200, list: 150 };
@@ -39,16 +40,7 @@ export async function weighPages(root: string, distDir = '.next', port = 3198): 
       env: { ...process.env, ...standIns.env, NODE_ENV: 'production', NEXT_DIST_DIR: distDir, DATABASE_URL: dbFile, APP_URL: base, NEXT_TELEMETRY_DISABLED: '1' },
       stdio: 'ignore',
     });
-    for (let i = 0; i < 240; i++) {
-      if (await fetch(`${base}/api/health`).then((r) => r.ok).catch(() => false)) break;
-      await new Promise((r) => setTimeout(r, 250));
-    }
-    const signIn = await fetch(`${base}/api/auth/sign-in`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json', origin: base },
-      body: JSON.stringify({ email: 'maker@demo.test', password: 'pourproof-demo' }),
-    });
-    const cookie = signIn.headers.get('set-cookie')!.split(';')[0]!;
+    const cookie = await signInWhenUp(base);
     type Item = { id: string; target: unknown; standardPourId: string | null };
     const body = (await (await fetch(`${base}/api/matches`, { headers: { cookie } })).json()) as Item[] | { items: Item[] };
     const list = Array.isArray(body) ? body : body.items;
