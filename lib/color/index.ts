@@ -1,6 +1,7 @@
 // The colour engine: pure functions, no DB, React or Next imports.
 export type * from './types';
 export { applyMat3 } from './applyMat3';
+export { areaByLuma, LUMA_CONTRAST_MIN } from './areaByLuma';
 export { bandFor } from './bandFor';
 export { blackClippedShare } from './blackClippedShare';
 export { bradfordAdapt } from './bradfordAdapt';

@@ -1,4 +1,5 @@
 import type { ColorSamples, FlakeGroup, Lab, Vec3 } from './types';
+import { areaByLuma } from './areaByLuma';
 import { clusterFlake } from './clusterFlake';
 import { flakeEndmembers } from './flakeEndmembers';
 import { labToHex } from './labToHex';
@@ -20,6 +21,8 @@ export interface FlakeInput {
   base: Lab;
   /** The base colour in linear XYZ (trulyBase). */
   bx: Vec3;
+  /** The photo's chroma is subsampled (JPEG 4:2:0): one flake colour's area comes from luminance (areaByLuma). */
+  lumaArea?: boolean;
 }
 
 /**
@@ -27,7 +30,9 @@ export interface FlakeInput {
  * colour groups come from clusterFlake (on the core, clear of blended edges, when there is one),
  * each group's pure colour from flakeEndmembers, and the area by linear unmixing in linear light
  * (unmixCoverage) of the summed deviation from the base of every pixel but glare and other: a
- * pixel that is part flake counts by its part. Returns the area in sampled pixels.
+ * pixel that is part flake counts by its part. With subsampled chroma and one flake colour of a
+ * clearly different lightness, the area comes from luminance alone (areaByLuma). Returns the area
+ * in sampled pixels.
  */
 export function measureFlake(x: FlakeInput): { area: number; groups: FlakeGroup[] } {
   const { lab, xyz, dist, keepWithin, off, other, glare, base, bx } = x;
@@ -50,10 +55,14 @@ export function measureFlake(x: FlakeInput): { area: number; groups: FlakeGroup[
   const ends = flakeEndmembers(clustered.map((g) => g.lab), fl, flakeIdx, xyz, bx);
 
   const sum: Vec3 = [0, 0, 0];
+  let counted = 0;
   for (let i = 0, j = 0; i < n; i++, j += 3) {
     if (glare[i] || other[i]) continue;
+    counted++;
     sum[0] += xyz[j] - bx[0]; sum[1] += xyz[j + 1] - bx[1]; sum[2] += xyz[j + 2] - bx[2];
   }
+  const byLuma = x.lumaArea && ends.length === 1 ? areaByLuma(sum[1], counted, bx[1], ends[0].xyz[1]) : null;
+  if (byLuma !== null) return { area: byLuma, groups: [{ lab: ends[0].lab, hex: labToHex(ends[0].lab), share: 1 }] };
   const areas = ends.length ? unmixCoverage(sum, bx, ends.map((e) => e.xyz)) : [];
   const area = areas.reduce((s, v) => s + v, 0);
   const groups = ends

@@ -16,6 +16,8 @@ import { trulyBase } from './trulyBase';
 export interface RegionContext {
   /** How coarse the file's lossy compression was: 0 lossless, ≈ 0.2 JPEG q90, ≈ 0.5 q75 (jpegQuantScale). */
   compression?: number;
+  /** Chroma kept at lower resolution than luma (JPEG 4:2:0 or 4:2:2, lossy WebP): flake area from luminance. */
+  subsampled?: boolean;
   /** With a grey card: the other correction's XYZ over the one applied (castAmbiguity). */
   otherLight?: Mat3;
 }
@@ -31,7 +33,8 @@ export interface RegionContext {
  * 4. Other (findOtherColour): a solid, connected second colour among the pixels that are not base.
  * 5. The base colour is the mean in linear light of the truly base pixels (trulyBase): kept, and
  *    with no non-base pixel close by, so specks blurred into their neighbours do not tint it.
- * 6. Flake (measureFlake): colour groups, pure colours and the area by linear unmixing.
+ * 6. Flake (measureFlake): colour groups, pure colours and the area by linear unmixing (by
+ *    luminance alone when the chroma is subsampled and the flake's lightness differs enough).
  * 7. The ± (regionUncertainty); spread = median CIEDE2000 of the kept pixels to the base.
  */
 export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): RegionMeasure {
@@ -56,7 +59,7 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
   labInto(bx[0], bx[1], bx[2], out, 0);
   const base = { l: out[0], a: out[1], b: out[2] };
 
-  const flake = measureFlake({ lab, xyz, dist, keepWithin, off, other: otherMask, glare, base, bx });
+  const flake = measureFlake({ lab, xyz, dist, keepWithin, off, other: otherMask, glare, base, bx, lumaArea: ctx.subsampled ?? false });
   const coverage = Math.min(flake.area / n, (n - glareCount - otherCount) / n);
   const spread = medianSpread(lab, kept, base, keptCount);
   const otherOut = other ? { share: otherCount / n, lab: other.lab } : null;

@@ -26,8 +26,9 @@ const ROUGH_MIN = 3;
 // speck's rim in them sit in the upper part); (2) mean shift
 // with a flat window of MODE_SIGMAS σ from the estimate to the mode of the kept colours
 // (K. Fukunaga & L. Hostetler, IEEE Trans. Inf. Theory 21(1), 1975); (3) of the pixels inside
-// that window, those with none outside it (glare aside) within `radius` cells; their mean in
-// linear light is the base (all inside the window when too few are left).
+// that window, those with none outside it (glare aside) within `radius` cells, or 1 cell when
+// too few are left; their mean in linear light is the base (all inside the window when even
+// those are too few).
 export interface TrulyBaseInput {
   lab: Float32Array;
   xyz: Float32Array;
@@ -83,13 +84,20 @@ export function trulyBase({ lab, xyz, kept, glare, rp, start, keepWithin, radius
     if (near[i]) anyNear = true;
   }
   if (!anyNear) near.set(kept);
-  const close = rp.rough ? roughOnLattice(rp, near, rp.rough[radius - 1]) : besideOther(near, glare, rp, radius);
-  let nearCount = 0, pure = 0;
-  for (let i = 0; i < n; i++) {
-    nearCount += near[i];
-    if (near[i] && !close[i]) pure++;
+  // The widest clearance that still leaves enough pixels, `radius` down to 1: with dense flake few
+  // pixels are 2 cells from every speck, and the nearest-but-one are still far less tinted than all.
+  const enough = (pure: number, nearCount: number) => pure >= Math.max(30, 0.02 * nearCount);
+  let close: Uint8Array = new Uint8Array(n);
+  let usePure = false;
+  for (let r = radius; r >= 1 && !usePure; r--) {
+    close = rp.rough ? roughOnLattice(rp, near, rp.rough[r - 1]) : besideOther(near, glare, rp, r);
+    let nearCount = 0, pure = 0;
+    for (let i = 0; i < n; i++) {
+      nearCount += near[i];
+      if (near[i] && !close[i]) pure++;
+    }
+    usePure = enough(pure, nearCount);
   }
-  const usePure = pure >= Math.max(30, 0.02 * nearCount);
   const bx: Vec3 = [0, 0, 0];
   let count = 0;
   for (let i = 0; i < n; i++) {

@@ -14,6 +14,8 @@ export interface ImageHeader {
   height: number;
   /** The embedded ICC profile, if any. */
   icc?: Buffer;
+  /** JPEG only: chroma subsampling from the frame header's sampling factors (sharp), e.g. '4:2:0'. */
+  chromaSubsampling?: string;
 }
 
 const TYPE_MESSAGE = "This file isn't a JPEG, PNG or WebP image we can read. Upload a JPEG, PNG or WebP photo.";
@@ -76,5 +78,6 @@ export async function inspectImage(buf: Buffer): Promise<ImageHeader> {
     width: meta.autoOrient?.width ?? (swap ? height : width),
     height: meta.autoOrient?.height ?? (swap ? width : height),
     ...(meta.icc ? { icc: meta.icc } : {}),
+    ...(meta.chromaSubsampling ? { chromaSubsampling: meta.chromaSubsampling } : {}),
   };
 }

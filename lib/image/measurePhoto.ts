@@ -124,11 +124,13 @@ export async function measurePhoto(
   }
   // JPEG: how coarse its quantisation was (jpegQuantScale); WebP may be lossy: counted as a mid JPEG.
   const compression = header.format === 'png' ? 0 : header.format === 'jpeg' ? (jpegQuantScale(buf) ?? 0.5) : 0.5;
+  // Chroma at less than full resolution (ITU-T T.81 sampling factors; lossy WebP is always 4:2:0).
+  const subsampled = header.format === 'jpeg' ? !!header.chromaSubsampling && !header.chromaSubsampling.startsWith('4:4:4') : header.format === 'webp';
   const clippedBlack: string[] = [];
   const measured = regions.map((r, i) => {
     const rp = sampleRegion(window, spans[i], toXyz, profile, maxSamples);
     if (blackClippedShare(rp.samples) >= BLACK_CLIP_WARNING) clippedBlack.push(r.name);
-    return { name: r.name, ...measureRegion(rp, { compression, otherLight: card?.otherFromFirst }) };
+    return { name: r.name, ...measureRegion(rp, { compression, subsampled, otherLight: card?.otherFromFirst }) };
   });
   const clipWarning = clippedBlack.length
     ? `A colour channel is clipped to black in ${clippedBlack.map((n) => `"${n}"`).join(', ')}: the camera lost part of ${clippedBlack.length > 1 ? 'their' : 'its'} colour, and no correction brings it back. Reshoot under daylight-balanced light, a little brighter.`

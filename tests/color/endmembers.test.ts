@@ -1,7 +1,7 @@
 // Flake endmembers and unmixing on constructed pixels (linear XYZ), where the truth is known by
 // construction: the linear mixing model (Keshava & Mustard, IEEE Signal Processing Magazine 19(1), 2002).
 import { describe, expect, it } from 'vitest';
-import { flakeEndmembers, labInto, unmixCoverage, type Vec3 } from '@/lib/color';
+import { areaByLuma, flakeEndmembers, labInto, unmixCoverage, type Vec3 } from '@/lib/color';
 import { rng } from './synth';
 
 const lab = (x: Vec3) => {
@@ -58,5 +58,26 @@ describe('unmixCoverage', () => {
     const areas = unmixCoverage(sum, b, [0, 1, 2].map((k) => [b[0] + [d0, d1][k % 2][0], b[1] + [d0, d1][k % 2][1], b[2] + [d0, d1][k % 2][2]]).slice(0, 2) as Vec3[]);
     expect(Math.abs(areas[0] - 1540)).toBeLessThan(1);
     expect(areas[1]).toBe(0);
+  });
+});
+
+describe('areaByLuma', () => {
+  it('recovers the area of partial pixels from luminance alone, whatever their chroma reads', () => {
+    const rand = rng(11);
+    const by = 0.2, fy = 0.01; // a mid base, black flake
+    let dy = 0, area = 0;
+    for (let i = 0; i < 5000; i++) {
+      const a = rand() < 0.15 ? rand() : 0; // part-flake pixels
+      area += a;
+      dy += a * (fy - by) + (rand() - 0.5) * 0.004; // linear mixing in Y plus a little noise
+    }
+    const got = areaByLuma(dy, 5000, by, fy);
+    expect(got).not.toBeNull();
+    expect(Math.abs((got as number) - area) / 5000).toBeLessThan(0.002);
+  });
+
+  it('declines when flake and base have about the same lightness, or the answer is no mixture', () => {
+    expect(areaByLuma(1, 1000, 0.2, 0.205)).toBeNull();
+    expect(areaByLuma(50, 1000, 0.2, 0.01)).toBeNull(); // brighter overall than the base, yet black flake
   });
 });

@@ -2,6 +2,7 @@
 // blue and silver at 2–20 % coverage on five bases, lens blur, sensor noise, JPEG q90 4:2:0.
 // Truth: culori lab65 of the scene; ΔE00 cross-checked with colorjs.io. Targets: issue 11's table.
 import { beforeAll, describe, expect, it } from 'vitest';
+import { LUMA_CONTRAST_MIN } from '@/lib/color';
 import { BASES, colorjsDe00, covered, FLAKES, measureSpec, median, type Outcome } from '../support/photoCases';
 
 const COVERAGES = [0.02, 0.05, 0.1, 0.2];
@@ -32,13 +33,13 @@ describe('fine flake (issue 11 table, row 1), JPEG q90', () => {
     expect(median(results.map((r) => r.error))).toBeLessThanOrEqual(0.7);
   });
 
-  // Target ±0.04 on every photo. Held on 59 of these 60; one dense low-contrast case (20 % blue
-  // flake) reads ≈ 0.045 off: asserted as ≥ 95 % within ±0.04 and every photo within ±0.05, so a
-  // regression still fails.
-  it('coverage by area within ±0.04 of the true share (≥ 95 % of photos; all within ±0.05)', () => {
-    const off = results.map((r) => Math.abs(r.out.regions[0].flake.coverage - r.truth.coverage));
-    expect(off.filter((d) => d <= 0.04).length / off.length).toBeGreaterThanOrEqual(0.95);
-    const bad = results.filter((_, k) => off[k] > 0.05).map((r) => `${r.label}: ${r.out.regions[0].flake.coverage.toFixed(3)} vs ${r.truth.coverage.toFixed(3)}`);
+  // JPEG 4:2:0 keeps luma at full resolution and chroma at half (ITU-T T.81, JFIF sampling
+  // factors), so the area of a flake whose lightness differs from the base is read from Y
+  // (areaByLuma): every photo within ±0.04.
+  it('coverage by area within ±0.04 of the true share on every photo', () => {
+    const bad = results
+      .filter((r) => Math.abs(r.out.regions[0].flake.coverage - r.truth.coverage) > 0.04)
+      .map((r) => `${r.label}: ${r.out.regions[0].flake.coverage.toFixed(3)} vs ${r.truth.coverage.toFixed(3)}`);
     expect(bad).toEqual([]);
   });
 
@@ -57,30 +58,39 @@ describe('fine flake (issue 11 table, row 1), JPEG q90', () => {
   });
 });
 
-// JPEG q75 keeps much less of the fine chroma (4:2:0 and coarser quantisation): a 1–3 px speck's
-// chroma is spread over its neighbours while its lightness stays put, so no pixel shows the pure
-// flake colour. Known limits: on the dark blue base 20 % blue or silver flake moves the base by up
-// to ≈ 1.8 (the chroma of the base pixels themselves is tinted); blue on blue is low-contrast and
-// reads ≈ 0.1 low in coverage, sparse blue on the pale bubblegum ≈ 0.07 high. Silver that sparkles
-// (specks of different brightness) is unmixed against its mean colour, not its brightest specks.
-// Checked at base ≤ 2.0 (median 0.7), ≥ 85 % of coverages within ±0.04 and all within ±0.10,
-// so that it cannot get worse unnoticed.
+// JPEG q75 with 4:2:0 (ITU-T T.81; JFIF: chroma at half resolution both ways, quantised more
+// coarsely than luma): a 1–3 px speck keeps its lightness in its own pixels while its chroma is
+// spread over its neighbours. So the area of a flake lighter or darker than the base is read from
+// luminance (areaByLuma) and the base from pixels clear of specks (trulyBase). Held to the issue's
+// limits: base ≤ 1.5 ΔE00 (median ≤ 0.7) wherever the flake's L* differs from the base's by at
+// least LUMA_CONTRAST_MIN, no glare, the ± holding ≥ 90 %. Known limits: where flake and base have
+// the same L* (blue specks on the dark blue base) only chroma tells them apart, and q75 has lost
+// most of it: the base reads up to ≈ 1.8 off and the area ≈ 0.1 low (held at 2.0 and ±0.10); and
+// sparse dark blue specks on a pale base lose their chroma core-first, so their blended rims form a
+// second colour group and the area reads ≈ 0.07 high. Coverage: ≥ 90 % within ±0.04, all ±0.10.
 describe('fine flake at JPEG q75', () => {
   const q75: Outcome[] = [];
+  /** Whether the flake's L* differs from the base's enough for luminance to tell its area. */
+  const contrast = new Map<Outcome, boolean>();
   beforeAll(async () => {
     let seed = 500;
     for (const [flakeName, flake] of Object.entries(FLAKES))
       for (const [baseName, base] of Object.entries(BASES))
-        for (const coverage of [0.05, 0.2])
-          q75.push(await measureSpec(`${flakeName} ${coverage * 100} % on ${baseName}`, { seed: seed++, base, flake: { colours: [flake.colour], coverage, sizes: [1, 3], sparkle: flake.sparkle }, blur: 0.6, format: 'jpeg75' }));
+        for (const coverage of [0.05, 0.2]) {
+          const r = await measureSpec(`${flakeName} ${coverage * 100} % on ${baseName}`, { seed: seed++, base, flake: { colours: [flake.colour], coverage, sizes: [1, 3], sparkle: flake.sparkle }, blur: 0.6, format: 'jpeg75' });
+          q75.push(r);
+          contrast.set(r, Math.abs(flake.colour.l - base.l) >= LUMA_CONTRAST_MIN);
+        }
   }, 300_000);
 
-  it('base within ΔE00 2.0 (median 0.7), no glare, coverage as above, the ± holding ≥ 90 %', () => {
-    expect(q75.filter((r) => r.error > 2.0).map((r) => r.label)).toEqual([]);
+  it('base within ΔE00 1.5 where lightness differs (2.0 where not), median 0.7, no glare, coverage as above, the ± holding ≥ 90 %', () => {
+    expect(contrast.size).toBe(q75.length);
+    expect(q75.filter((r) => !contrast.get(r)).length).toBeLessThanOrEqual(2); // the limit 2.0 is the exception
+    expect(q75.filter((r) => r.error > (contrast.get(r) ? 1.5 : 2.0)).map((r) => `${r.label}: ${r.error.toFixed(2)}`)).toEqual([]);
     expect(median(q75.map((r) => r.error))).toBeLessThanOrEqual(0.7);
     expect(q75.filter((r) => r.out.regions[0].glare > 0.02).map((r) => r.label)).toEqual([]);
     const off = q75.map((r) => Math.abs(r.out.regions[0].flake.coverage - r.truth.coverage));
-    expect(off.filter((d) => d <= 0.04).length / off.length).toBeGreaterThanOrEqual(0.85);
+    expect(off.filter((d) => d <= 0.04).length / off.length).toBeGreaterThanOrEqual(0.9);
     expect(q75.filter((_, k) => off[k] > 0.1).map((r) => r.label)).toEqual([]);
     expect(covered(q75)).toBeGreaterThanOrEqual(0.9);
   });
