@@ -65,14 +65,15 @@ function cellClass(id: string, meta: unknown): string {
   return id === 'name' ? 'sticky left-0 z-10 bg-inherit' : '';
 }
 
-export const SORTABLE = ['name', 'status', 'pours', 'latest', 'activity', 'maker'] as const;
+// The columns a maker may sort by, read from the column definitions themselves.
+const SORTABLE = new Set(columns.filter((c) => c.enableSorting !== false).map((c) => c.id ?? (c as { accessorKey?: string }).accessorKey));
 export const DEFAULT_SORT: SortingState = [{ id: 'activity', desc: true }];
 
 /** The sort in the address: `name` (A→Z), `-latest` (highest first); nothing is newest activity first. */
 export function parseSort(value: string | undefined): SortingState {
   if (value === 'none') return [];
   const id = value?.replace(/^-/, '');
-  if (!id || !(SORTABLE as readonly string[]).includes(id)) return DEFAULT_SORT;
+  if (!id || !SORTABLE.has(id)) return DEFAULT_SORT;
   return [{ id, desc: value!.startsWith('-') }];
 }
 

@@ -74,6 +74,8 @@ async function fit(teamId: string, stamp: string, observations: ReturnType<typeo
     }),
   );
   const entry: Entry = { model, typical, flake, fittedOn: observations.length, stamp, keySet: new Set(doses.keys()) };
-  cache.set(teamId, entry);
+  // Two refits may overlap (the history moved on meanwhile): the one fitted on more colours stays.
+  const held = cache.get(teamId);
+  if (!held || held.fittedOn <= entry.fittedOn) cache.set(teamId, entry);
   return entry;
 }
