@@ -1,9 +1,11 @@
 import type { ColorSamples, FlakeGroup, Lab, Vec3 } from './types';
 import { areaByLuma } from './areaByLuma';
+import { areaByLumaCode, type LumaCodeInput } from './areaByLumaCode';
 import { clusterFlake } from './clusterFlake';
 import { flakeEndmembers } from './flakeEndmembers';
 import { labToHex } from './labToHex';
 import { unmixCoverage } from './unmixCoverage';
+import { xyzToLab } from './xyzToLab';
 
 /** Flake samples farther than this many keep-thresholds from the base are whole flake (core). */
 export const FLAKE_CORE = 2;
@@ -23,6 +25,10 @@ export interface FlakeInput {
   bx: Vec3;
   /** The photo's chroma is subsampled (JPEG 4:2:0): one flake colour's area comes from luminance (areaByLuma). */
   lumaArea?: boolean;
+  /** The groups are one flake colour seen through smeared chroma (isOneSmearedFlake): keep the one farthest from the base. */
+  oneColour?: boolean;
+  /** With subsampled chroma: every pixel's luma Y' and the base's (regionLuma), for areaByLumaCode. */
+  luma?: Omit<LumaCodeInput, 'flake'>;
 }
 
 /**
@@ -51,7 +57,9 @@ export function measureFlake(x: FlakeInput): { area: number; groups: FlakeGroup[
   }
   if (flakeCount === 0) return { area: 0, groups: [] };
   const samples: ColorSamples = { rgb: new Uint8Array(0), lab: fl, counts: new Uint32Array(flakeCount).fill(1), size: flakeCount, total: flakeCount, pixels: flakeCount };
-  const clustered = clusterFlake(samples, coreCount > 0 ? core : new Uint8Array(flakeCount).fill(1), base);
+  const all = clusterFlake(samples, coreCount > 0 ? core : new Uint8Array(flakeCount).fill(1), base);
+  const far = (g: { lab: Lab }) => (g.lab.l - base.l) ** 2 + (g.lab.a - base.a) ** 2 + (g.lab.b - base.b) ** 2;
+  const clustered = x.oneColour && all.length > 1 ? [all.reduce((p, q) => (far(q) > far(p) ? q : p))] : all;
   const ends = flakeEndmembers(clustered.map((g) => g.lab), fl, flakeIdx, xyz, bx);
 
   const sum: Vec3 = [0, 0, 0];
@@ -63,6 +71,17 @@ export function measureFlake(x: FlakeInput): { area: number; groups: FlakeGroup[
   }
   const byLuma = x.lumaArea && ends.length === 1 ? areaByLuma(sum[1], counted, bx[1], ends[0].xyz[1]) : null;
   if (byLuma !== null) return { area: byLuma, groups: [{ lab: ends[0].lab, hex: labToHex(ends[0].lab), share: 1 }] };
+  if (x.lumaArea && x.luma && ends.length === 1) {
+    const flake = new Uint8Array(n);
+    for (let i = 0; i < n; i++) flake[i] = off[i] && !other[i] ? 1 : 0;
+    const area = areaByLumaCode({ ...x.luma, flake });
+    // Its colour: the base plus the region's mean deviation over the area (linear mixing), which
+    // the smear keeps, where the cores' own chroma has been spread away.
+    if (area !== null && area <= counted) {
+      const lab = xyzToLab([bx[0] + sum[0] / area, bx[1] + sum[1] / area, bx[2] + sum[2] / area]);
+      return { area, groups: [{ lab, hex: labToHex(lab), share: 1 }] };
+    }
+  }
   const areas = ends.length ? unmixCoverage(sum, bx, ends.map((e) => e.xyz)) : [];
   const area = areas.reduce((s, v) => s + v, 0);
   const groups = ends

@@ -1,10 +1,12 @@
-import type { Mat3, RegionMeasure } from './types';
+import type { Mat3, RegionMeasure, Vec3 } from './types';
+import { regionLuma } from './regionLuma';
+import { smearedFlake } from './smearedFlake';
 import { castAmbiguity } from './castAmbiguity';
 import { correctShading } from './correctShading';
 import { findOtherColour } from './findOtherColour';
 import { keepNearBase } from './keepNearBase';
 import { labToHex } from './labToHex';
-import { measureFlake } from './measureFlake';
+import { type FlakeInput, measureFlake } from './measureFlake';
 import { medianLab } from './medianLab';
 import { medianSpread } from './medianSpread';
 import { pixelColours } from './pixelColours';
@@ -13,6 +15,13 @@ import { regionUncertainty } from './regionUncertainty';
 import { separateGlare } from './separateGlare';
 import { trulyBase } from './trulyBase';
 
+/**
+ * Chroma smeared this coarsely (jpegQuantScale: 0.2 at JPEG q90, 0.5 at q75; this is about q82)
+ * is read through the luma (smearedFlake). Finer, the truly base pixels are clean enough. Ours,
+ * from tests/color/fineFlake.test.ts.
+ */
+export const SMEAR_COMPRESSION = 0.35;
+
 export interface RegionContext {
   /** How coarse the file's lossy compression was: 0 lossless, ≈ 0.2 JPEG q90, ≈ 0.5 q75 (jpegQuantScale). */
   compression?: number;
@@ -20,6 +29,8 @@ export interface RegionContext {
   subsampled?: boolean;
   /** With a grey card: the other correction's XYZ over the one applied (castAmbiguity). */
   otherLight?: Mat3;
+  /** The photo's linear RGB → XYZ as applied (card included): with subsampled chroma, flake is read through luma (regionLuma, smearedFlake). */
+  toXyz?: Mat3;
 }
 
 /**
@@ -34,7 +45,10 @@ export interface RegionContext {
  * 5. The base colour is the mean in linear light of the truly base pixels (trulyBase): kept, and
  *    with no non-base pixel close by, so specks blurred into their neighbours do not tint it.
  * 6. Flake (measureFlake): colour groups, pure colours and the area by linear unmixing (by
- *    luminance alone when the chroma is subsampled and the flake's lightness differs enough).
+ *    luminance alone when the chroma is subsampled and the flake's lightness differs enough, by
+ *    JPEG's luma Y' when only that differs: regionLuma, areaByLumaCode). With coarsely
+ *    subsampled chroma (SMEAR_COMPRESSION) the base is read from behind the smear and the flake
+ *    measured again against it (smearedFlake).
  * 7. The ± (regionUncertainty); spread = median CIEDE2000 of the kept pixels to the base.
  */
 export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): RegionMeasure {
@@ -54,12 +68,20 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
   let otherCount = 0;
   for (let i = 0; i < n; i++) otherCount += otherMask[i];
 
-  const { xyz: bx, count: nb } = trulyBase({ lab, xyz, kept, glare, rp, start: near, keepWithin, radius: (ctx.compression ?? 0) > 0 ? 2 : 1 });
-  const out = new Float64Array(3);
-  labInto(bx[0], bx[1], bx[2], out, 0);
-  const base = { l: out[0], a: out[1], b: out[2] };
-
-  const flake = measureFlake({ lab, xyz, dist, keepWithin, off, other: otherMask, glare, base, bx, lumaArea: ctx.subsampled ?? false });
+  const truly = trulyBase({ lab, xyz, kept, glare, rp, start: near, keepWithin, radius: (ctx.compression ?? 0) > 0 ? 2 : 1 });
+  const nb = truly.count;
+  const flakeOf = (bx: Vec3, oneColour = false, luma?: FlakeInput['luma']) => {
+    const out = new Float64Array(3);
+    labInto(bx[0], bx[1], bx[2], out, 0);
+    const base = { l: out[0], a: out[1], b: out[2] };
+    return { base, bx, ...measureFlake({ lab, xyz, dist, keepWithin, off, other: otherMask, glare, base, bx, lumaArea: ctx.subsampled ?? false, oneColour, luma }) };
+  };
+  // With subsampled chroma (JPEG 4:2:0) each pixel's luma is still its own: read it once.
+  const rl = ctx.subsampled && ctx.toXyz && step === 1 ? regionLuma(xyz, glare, otherMask, truly.mask, rp, ctx.toXyz) : null;
+  let flake = flakeOf(truly.xyz, false, rl?.luma);
+  // Coarse chroma tints every pixel near a speck and spreads a speck's colour: read through the luma.
+  if (rl && ctx.toXyz && (ctx.compression ?? 0) >= SMEAR_COMPRESSION && flake.groups.length > 0) flake = smearedFlake(rl, truly.mask, rp, ctx.toXyz, flakeOf) ?? flake;
+  const base = flake.base;
   const coverage = Math.min(flake.area / n, (n - glareCount - otherCount) / n);
   const spread = medianSpread(lab, kept, base, keptCount);
   const otherOut = other ? { share: otherCount / n, lab: other.lab } : null;

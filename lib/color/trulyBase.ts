@@ -41,7 +41,7 @@ export interface TrulyBaseInput {
   radius: 1 | 2;
 }
 
-export function trulyBase({ lab, xyz, kept, glare, rp, start, keepWithin, radius }: TrulyBaseInput): { xyz: Vec3; count: number } {
+export function trulyBase({ lab, xyz, kept, glare, rp, start, keepWithin, radius }: TrulyBaseInput): { xyz: Vec3; count: number; mask: Uint8Array } {
   const { cell, gridW, gridH } = rp;
   const n = kept.length;
   const at = new Int32Array(gridW * gridH).fill(-1);
@@ -99,13 +99,15 @@ export function trulyBase({ lab, xyz, kept, glare, rp, start, keepWithin, radius
     usePure = enough(pure, nearCount);
   }
   const bx: Vec3 = [0, 0, 0];
+  const mask = new Uint8Array(n);
   let count = 0;
   for (let i = 0; i < n; i++) {
     if (!near[i] || (usePure && close[i])) continue;
     count++;
+    mask[i] = 1;
     bx[0] += xyz[i * 3]; bx[1] += xyz[i * 3 + 1]; bx[2] += xyz[i * 3 + 2];
   }
-  return { xyz: [bx[0] / count, bx[1] / count, bx[2] / count], count };
+  return { xyz: [bx[0] / count, bx[1] / count, bx[2] / count], count, mask };
 }
 
 // Every pixel measured: a near pixel is close to something else when a pixel within `radius`

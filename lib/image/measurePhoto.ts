@@ -5,13 +5,16 @@ import {
   type Lab,
   type Mat3,
   measureRegion,
+  patchSample,
   type PixelWindow,
+  type RegionContext,
   regionPixels,
   type RegionMeasure,
   type RegionPixels,
   type RgbProfile,
   type Shape,
   shapeSpans,
+  SMEAR_COMPRESSION,
   spanBounds,
 } from '@/lib/color';
 import { type CardBalance, whiteBalanceFromCard } from './whiteBalanceFromCard';
@@ -85,6 +88,20 @@ function sampleRegion(window: PixelWindow, spans: Int32Array, toXyz: Mat3, profi
   return rp.samples.total > 0 || step === 1 ? rp : regionPixels(window, spans, toXyz, 1, profile.linear);
 }
 
+/** A lattice reading with at least this much flake in a subsampled photo is read again on patches. Ours. */
+export const PATCH_FLAKE_MIN = 0.01;
+
+// Subsampled chroma (JPEG 4:2:0) spreads a fine speck's colour over its neighbours, which a
+// lattice does not see: the base and flake are read again on patches of every pixel (patchSample,
+// about twice the lattice's pixels), where smearedFlake can model the smear. Glare, the second
+// colour and the shading stay the lattice's, read over the whole region.
+function withPatches(m: RegionMeasure, window: PixelWindow, spans: Int32Array, profile: RgbProfile, ctx: RegionContext, maxSamples: number): RegionMeasure {
+  const patches = patchSample(window, spans, 2 * maxSamples);
+  if (!patches) return m;
+  const p = measureRegion(regionPixels(patches.window, patches.spans, ctx.toXyz, 1, profile.linear), ctx);
+  return { ...m, lab: p.lab, hex: p.hex, flake: p.flake, uncertainty: p.uncertainty, kept: Math.round((p.kept / p.pixels) * m.pixels), spread: p.spread };
+}
+
 /**
  * Measures named regions of a photo: header checks, then one decode of the box around all
  * regions (and the neutral patch) in the photo's own colour space (decodeImage), white balance
@@ -127,10 +144,13 @@ export async function measurePhoto(
   // Chroma at less than full resolution (ITU-T T.81 sampling factors; lossy WebP is always 4:2:0).
   const subsampled = header.format === 'jpeg' ? !!header.chromaSubsampling && !header.chromaSubsampling.startsWith('4:4:4') : header.format === 'webp';
   const clippedBlack: string[] = [];
+  const ctx = { compression, subsampled, otherLight: card?.otherFromFirst, toXyz };
   const measured = regions.map((r, i) => {
     const rp = sampleRegion(window, spans[i], toXyz, profile, maxSamples);
     if (blackClippedShare(rp.samples) >= BLACK_CLIP_WARNING) clippedBlack.push(r.name);
-    return { name: r.name, ...measureRegion(rp, { compression, subsampled, otherLight: card?.otherFromFirst }) };
+    const m = measureRegion(rp, ctx);
+    const smeared = subsampled && compression >= SMEAR_COMPRESSION && rp.step > 1 && m.flake.coverage >= PATCH_FLAKE_MIN;
+    return { name: r.name, ...(smeared ? withPatches(m, window, spans[i], profile, ctx, maxSamples) : m) };
   });
   const clipWarning = clippedBlack.length
     ? `A colour channel is clipped to black in ${clippedBlack.map((n) => `"${n}"`).join(', ')}: the camera lost part of ${clippedBlack.length > 1 ? 'their' : 'its'} colour, and no correction brings it back. Reshoot under daylight-balanced light, a little brighter.`

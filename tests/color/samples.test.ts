@@ -103,6 +103,25 @@ describe('the default lattice on a realistic large photo (tests/support/photoGen
   }, 120_000);
 });
 
+// A lattice sees one pixel in every few and cannot tell a sampled pixel tinted by a speck's
+// smeared chroma (JPEG q75, 4:2:0) from base: with flake in such a photo the base and flake are
+// read again on patches of every pixel (patchSample). Seeds and sizes not used elsewhere.
+describe('fine flake in a large JPEG q75 photo, read on patches', () => {
+  it.each([
+    ['blue flake on the dark blue base (one L*)', { l: 35, a: 5, b: -25 }, { l: 35, a: 15, b: -60 }],
+    ['blue flake on green', { l: 55, a: -30, b: 25 }, { l: 35, a: 15, b: -60 }],
+    ['black flake on pumpkin', { l: 62, a: 30, b: 55 }, { l: 8, a: 0, b: 0 }],
+  ])('%s, 20 %, 800 × 600: base within ΔE00 1.0, coverage within ±0.04, the ± holding', async (_n, base, colour) => {
+    const t = await makePhoto({ seed: 91, width: 800, height: 600, base, flake: { colours: [colour], coverage: 0.2, sizes: [1, 3] }, blur: 0.6, format: 'jpeg75' });
+    const m = (await measurePhoto(t.file, [{ name: 'z', shape: t.region }])).regions[0];
+    expect(m.pixels).toBeGreaterThan(20 * DEFAULT_MAX_SAMPLES); // so the lattice is sparse
+    expect(deltaE2000(m.lab, t.lab)).toBeLessThan(1);
+    expect(Math.abs(m.flake.coverage - t.coverage)).toBeLessThanOrEqual(0.04);
+    expect(deltaE2000(m.lab, t.lab)).toBeLessThanOrEqual(m.uncertainty);
+    expect(m.glare).toBeLessThanOrEqual(0.02);
+  }, 60_000);
+});
+
 describe('measureRegion on a hand-made window', () => {
   it('keeps the base, calls the dark specks flake by area and the clipped streak glare', () => {
     // 40 × 25 px: base everywhere, a 20 × 3 px clipped streak on rows 0–2, twenty 2 × 2 dark specks.
