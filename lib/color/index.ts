@@ -7,6 +7,7 @@ export { blackClippedShare } from './blackClippedShare';
 export { bradfordAdapt } from './bradfordAdapt';
 export { BRADFORD, BRADFORD_INVERSE, bradfordMatrix } from './bradfordMatrix';
 export { BLEND_RESIDUAL, BLEND_T, clusterFlake, FLAKE_MERGE_DE00, FLAKE_MIN_SHARE, MAX_FLAKE_GROUPS } from './clusterFlake';
+export { coverageUncertainty, U_COVERAGE_FLOOR, U_COVERAGE_PER_COMPRESSION, U_COVERAGE_REL, type CoverageUncertaintyInputs } from './coverageUncertainty';
 export { compareLab, DEFAULT_TOLERANCE } from './compareLab';
 export { castAmbiguity } from './castAmbiguity';
 export { correctWhiteBalance, type WhiteBalance, type WhiteBalanceMethod } from './correctWhiteBalance';

@@ -1,9 +1,11 @@
 import type { Mat3, RegionMeasure } from './types';
 import { castAmbiguity } from './castAmbiguity';
 import { correctShading } from './correctShading';
+import { coverageUncertainty } from './coverageUncertainty';
 import { findOtherColour } from './findOtherColour';
 import { keepNearBase } from './keepNearBase';
 import { labToHex } from './labToHex';
+import { labToXyz } from './labToXyz';
 import { measureFlake } from './measureFlake';
 import { medianLab } from './medianLab';
 import { medianSpread } from './medianSpread';
@@ -35,7 +37,7 @@ export interface RegionContext {
  *    with no non-base pixel close by, so specks blurred into their neighbours do not tint it.
  * 6. Flake (measureFlake): colour groups, pure colours and the area by linear unmixing (by
  *    luminance alone when the chroma is subsampled and the flake's lightness differs enough).
- * 7. The ± (regionUncertainty); spread = median CIEDE2000 of the kept pixels to the base.
+ * 7. The ± (regionUncertainty; coverageUncertainty for the flake's area); spread = median CIEDE2000 of the kept pixels to the base.
  */
 export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): RegionMeasure {
   const { samples, gridW, gridH, cell, step } = rp;
@@ -70,7 +72,14 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
     kept: Math.round((keptCount * samples.pixels) / n),
     spread,
     glare: glareCount / n,
-    flake: { coverage, groups: flake.groups },
+    flake: {
+      coverage,
+      coverageUncertainty: coverageUncertainty({
+        xyz, bx, kept, glare, other: otherMask, coverage, step, compression: ctx.compression ?? 0,
+        flake: flake.groups.map((g) => ({ xyz: labToXyz(g.lab), share: g.share })),
+      }),
+      groups: flake.groups,
+    },
     uncertainty: regionUncertainty({
       spread,
       basePixels: nb,
