@@ -12,6 +12,8 @@ export { compareLab, DEFAULT_TOLERANCE } from './compareLab';
 export { castAmbiguity } from './castAmbiguity';
 export { correctWhiteBalance, type WhiteBalance, type WhiteBalanceMethod } from './correctWhiteBalance';
 export { deltaE2000 } from './deltaE2000';
+export { deltaE2000Weights } from './deltaE2000Weights';
+export { differenceUncertainty } from './differenceUncertainty';
 export { DEAD_BAND, describeDifference, type DifferenceWords, type HueDirection } from './describeDifference';
 export { fitFlakeRate, type FlakeObservation, type FlakeRate } from './fitFlakeRate';
 export { flakeDoseForCoverage } from './flakeDoseForCoverage';
