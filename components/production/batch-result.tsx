@@ -81,9 +81,9 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
 type Flake = { coverage: number; coverageUncertainty?: number };
 const plusMinus = (u: number | null | undefined) => (u ? ` ± ${u.toFixed(2)} ΔE00` : '');
 
-// The batch's flake coverage with its ± beside the standard's (shown when either has flake).
+// The batch's flake coverage with its ± beside the standard's.
 function FlakeLine({ flake, standard }: { flake: Flake | null; standard: Flake | null }) {
-  if (!flake || (flake.coverage === 0 && !standard?.coverage)) return null;
+  if (!flake) return null;
   return (
     <p className="num text-ink-soft">
       Flake {formatShare(flake.coverage, flake.coverageUncertainty)}{standard ? ` · standard ${formatShare(standard.coverage, standard.coverageUncertainty)}` : ''}
