@@ -64,6 +64,7 @@ export function coverageUncertainty(x: CoverageUncertaintyInputs): number {
   if (counted === 0) return 0;
   const nEff = Math.max(1, counted * independent);
   const c = Math.min(1, Math.max(0, coverage));
+  // At a coverage of 0 the binomial error is 0; a count is never surer than one counting unit.
   const counting = Math.sqrt(Math.max(c * (1 - c), 1 / nEff) / nEff);
 
   // σ_t² of the base pixels along each flake line, weighted by the groups' shares.
