@@ -18,7 +18,10 @@ export function DeltaReadout({ d, direction, extra, uncertainty, components }: {
         <BandBadge band={d.band} />
         {extra}
       </p>
-      <p className="num">ΔL* {formatSigned(d.dL, components?.dL)} · ΔC* {formatSigned(d.dC, components?.dC)} · ΔH* {formatSigned(d.dH, components?.dH)}</p>
+      <p className="num">
+        {/* Each figure stays on one line with its ±; a narrow screen breaks between them. */}
+        <span className="whitespace-nowrap">ΔL* {formatSigned(d.dL, components?.dL)}</span> · <span className="whitespace-nowrap">ΔC* {formatSigned(d.dC, components?.dC)}</span> · <span className="whitespace-nowrap">ΔH* {formatSigned(d.dH, components?.dH)}</span>
+      </p>
       {direction ? <p className="font-medium">{direction}</p> : null}
     </>
   );
