@@ -1,4 +1,4 @@
-import { formatLab } from '@/lib/format';
+import { formatLab, formatShare } from '@/lib/format';
 
 type Lab = { l: number; a: number; b: number };
 export type MeasureResult = {
@@ -7,7 +7,7 @@ export type MeasureResult = {
   whiteBalance: { applied: boolean; method: string; neutralLab?: Lab; cast?: number; warning?: string | null };
   regions: {
     name: string; lab: Lab; hex: string; pixels: number; kept: number; spread: number; glare: number;
-    flake: { coverage: number; groups: { lab: Lab; hex: string; share: number }[] };
+    flake: { coverage: number; coverageUncertainty?: number; groups: { lab: Lab; hex: string; share: number }[] };
     uncertainty?: number; shading?: number; other?: { share: number; lab: Lab } | null;
   }[];
 };
@@ -39,7 +39,7 @@ export function MeasureReadout({ result }: { result: MeasureResult }) {
             <dt className="text-ink-soft">Shading</dt><dd>{r.shading ? `light falls off by ${r.shading.toFixed(1)} L* across the region (taken out before flake is counted)` : 'evenly lit'}</dd>
             <dt className="text-ink-soft">Pixels</dt><dd>{r.pixels.toLocaleString()} in the region, {r.kept.toLocaleString()} kept as base</dd>
             <dt className="text-ink-soft">Spread</dt><dd>{r.spread.toFixed(2)} ΔE00 (median of kept pixels)</dd>
-            <dt className="text-ink-soft">Flake</dt><dd>{pct(r.flake.coverage)} of the region{r.flake.groups.length ? `, ${r.flake.groups.length} colour group${r.flake.groups.length > 1 ? 's' : ''}` : ''}</dd>
+            <dt className="text-ink-soft">Flake</dt><dd>{formatShare(r.flake.coverage, r.flake.coverageUncertainty)} of the region{r.flake.groups.length ? `, ${r.flake.groups.length} colour group${r.flake.groups.length > 1 ? 's' : ''}` : ''}</dd>
             <dt className="text-ink-soft">Glare</dt><dd>{pct(r.glare)}</dd>
             <dt className="text-ink-soft">Light</dt>
             <dd>

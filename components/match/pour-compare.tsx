@@ -36,7 +36,7 @@ export function PourCompare({ pourId, previousId, target, tolerance }: { pourId:
             <SwatchPair surround={surround} left={z.target.hex} right={z.hex} leftLabel="target" rightLabel={`pour #${pour.number}`} />
           </div>
           <div className="space-y-1">
-            <ZoneReadout zone={z} targetFlake={target.zones.find((t) => t.name === z.name)?.flakeCoverage ?? null} targetUncertainty={target.zones.find((t) => t.name === z.name)?.uncertainty ?? null} tolerance={tolerance} />
+            <ZoneReadout zone={z} targetFlake={target.zones.find((t) => t.name === z.name)?.flakeCoverage ?? null} targetFlakeUncertainty={target.zones.find((t) => t.name === z.name)?.flakeCoverageUncertainty ?? null} targetUncertainty={target.zones.find((t) => t.name === z.name)?.uncertainty ?? null} tolerance={tolerance} />
             <LightNote light={pour.light} />
           </div>
         </div>

@@ -4,7 +4,7 @@ import Link from 'next/link';
 import { useState } from 'react';
 import { DeltaReadout } from '@/components/color/delta-readout';
 import { LightNote } from '@/components/match/light-note';
-import { formatLab } from '@/lib/format';
+import { formatLab, formatShare } from '@/lib/format';
 import { InFrameLine, LightLine } from '@/components/color/measure-notes';
 import { verdictWords } from '@/components/color/verdict-words';
 import { SurroundToggle, SwatchPair, type Surround } from '@/components/color/swatch-pair';
@@ -57,9 +57,10 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
             <SwatchPair surround={surround} left={z.standard?.hex ?? '#777777'} right={z.hex} leftLabel={`standard #${batch.standardPourNumber}`} rightLabel="batch" />
           </div>
           <div className="space-y-1 text-sm">
-            <DeltaReadout d={z} direction={z.direction?.text} uncertainty={z.uncertainty} extra={<span className="font-medium">{verdictWords(z.dE00, batch.tolerance, z.uncertainty).text}</span>} />
+            <DeltaReadout d={z} direction={z.direction?.text} uncertainty={z.uncertainty} components={z.dLUncertainty !== null && z.dCUncertainty !== null && z.dHUncertainty !== null ? { dL: z.dLUncertainty, dC: z.dCUncertainty, dH: z.dHUncertainty } : null} extra={<span className="font-medium">{verdictWords(z.dE00, batch.tolerance, z.uncertainty).text}</span>} />
             <InFrameLine inFrame={z.inFrame as never} />
-            <p className="num text-ink-soft">Batch {lab(z.lab)}{z.regionUncertainty ? ` ± ${z.regionUncertainty.toFixed(2)} ΔE00` : ''}{z.standard ? ` · standard ${lab(z.standard.lab)}` : ''}</p>
+            <p className="num text-ink-soft">Batch {lab(z.lab)}{plusMinus(z.regionUncertainty)}{z.standard ? ` · standard ${lab(z.standard.lab)}${plusMinus(z.standard.uncertainty)}` : ''}</p>
+            <FlakeLine flake={z.flake as Flake | null} standard={z.standard?.flake ?? null} />
             <LightLine light={z.whiteBalance as never} />
             <LightNote light={batch.light} />
           </div>
@@ -74,6 +75,19 @@ export function BatchResult({ batch, onClose }: { batch: BatchView; onClose?: ()
         </div>
       ) : null}
     </section>
+  );
+}
+
+type Flake = { coverage: number; coverageUncertainty?: number };
+const plusMinus = (u: number | null | undefined) => (u ? ` ± ${u.toFixed(2)} ΔE00` : '');
+
+// The batch's flake coverage with its ± beside the standard's.
+function FlakeLine({ flake, standard }: { flake: Flake | null; standard: Flake | null }) {
+  if (!flake) return null;
+  return (
+    <p className="num text-ink-soft">
+      Flake {formatShare(flake.coverage, flake.coverageUncertainty)}{standard ? ` · standard ${formatShare(standard.coverage, standard.coverageUncertainty)}` : ''}
+    </p>
   );
 }
 

@@ -86,11 +86,11 @@ export function BatchSheet({ sheet }: { sheet: Sheet }) {
               <p className="mt-1 text-sm font-semibold capitalize text-white">{l.zone}</p>
               <p className="text-xs text-white">{layerLabel(l.position, sheet.layout.length)}</p>
               <p className="num text-sm font-semibold text-white">{formatVolume(l.cups, sheet.volumeUnit)}{sheet.volumeUnit === 'ml' ? '' : ` (${formatMl(l.ml)})`}</p>
-              {l.lab ? <p className="num text-xs text-white">{formatLab(l.lab)}</p> : null}
+              {l.lab ? <p className="num text-xs text-white">{formatLab(l.lab)}{l.uncertainty ? ` ± ${l.uncertainty.toFixed(2)} ΔE00` : ''}</p> : null}
             </li>
           ))}
         </ol>
-        <p className="mt-1 text-xs">Swatches as measured on the standard pour (CIELAB, D65 white). Screen and paper colours are a guide only: judge the bait against the standard bait.</p>
+        <p className="mt-1 text-xs">Swatches as measured on the standard pour (CIELAB, D65 white; ± about 95 % sure). Screen and paper colours are a guide only: judge the bait against the standard bait.</p>
       </section>
 
       {sheet.plan ? (

@@ -1,6 +1,6 @@
 import 'server-only';
 import { type SQL, and, asc, desc, eq, inArray } from 'drizzle-orm';
-import { describeDifference, labToHex } from '../../lib/color';
+import { describeDifference, differenceUncertainty, type Lab, labToHex } from '../../lib/color';
 import { type StandardRecipe, costOfBatch, defaultBase, getBase, standardRecipe } from '../../lib/batches/batchMaterials';
 import { splitZoneCups } from '../../lib/recipes';
 import { sampleFigures } from './pours';
@@ -75,8 +75,11 @@ function batchViews(database: DB, teamId: string, where: SQL | undefined, order:
           name: s.zone,
           lab,
           hex: s.hex,
-          standard: stdLab ? { lab: stdLab, hex: labToHex(stdLab) } : null,
+          // The standard pour's own zone: its ± (ΔE00, about 95 %) and flake, as measured.
+          standard: stdLab ? { lab: stdLab, hex: labToHex(stdLab), uncertainty: std!.uncertainty, flake: std!.flake as { coverage: number; coverageUncertainty?: number } } : null,
           ...sampleFigures(s),
+          // The ± of ΔL*, ΔC*, ΔH* from both measurements (differenceUncertainty); null without both ±.
+          ...componentUncertainty(stdLab, std?.uncertainty ?? null, lab, s.uncertainty),
           withinTolerance: s.dE00! <= tolerance,
           direction: stdLab ? describeDifference(stdLab, lab) : null,
         };
@@ -139,3 +142,8 @@ export function pageMatchBatches(database: DB, teamId: string, matchId: string, 
 }
 
 export type BatchView = NonNullable<ReturnType<typeof getBatch>>;
+
+function componentUncertainty(std: Lab | null, uStd: number | null, lab: Lab, u: number | null) {
+  const d = std && uStd !== null && u !== null ? differenceUncertainty(std, uStd, lab, u) : null;
+  return { dLUncertainty: d?.dL ?? null, dCUncertainty: d?.dC ?? null, dHUncertainty: d?.dH ?? null };
+}

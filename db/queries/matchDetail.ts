@@ -8,7 +8,7 @@ import { getMatch, type MatchView } from './matches';
 export type TargetPhoto = { photoId: string; width: number; height: number; zones: { name: string; shape: Shape; lab: { l: number; a: number; b: number }; hex: string }[] };
 export type TargetDetail = {
   /** `uncertainty`: the ± (ΔE00, about 95 %) of the target colour, the mean of its reference photos' (as addPour uses it). */
-  zones: { name: string; lab: { l: number; a: number; b: number }; hex: string; spread: number | null; flakeCoverage: number | null; uncertainty: number | null }[];
+  zones: { name: string; lab: { l: number; a: number; b: number }; hex: string; spread: number | null; flakeCoverage: number | null; flakeCoverageUncertainty: number | null; uncertainty: number | null }[];
   photos: TargetPhoto[];
 };
 export type DraftPhoto = { photoId: string; width: number; height: number };
@@ -33,12 +33,18 @@ export function getMatchDetail(database: DB, teamId: string, matchId: string): M
     const zs = rows.filter((r) => r.s.zone === zone).map((r) => (r.s.flake as { coverage: number }).coverage);
     return zs.length ? zs.reduce((a, b) => a + b, 0) / zs.length : null;
   };
+  // The ± of the mean coverage: the mean of the photos' ± (like the colour's: their systematic parts do not average out).
+  const flakeUncertaintyOf = (zone: string) => {
+    const us = rows.filter((r) => r.s.zone === zone).map((r) => (r.s.flake as { coverageUncertainty?: number }).coverageUncertainty);
+    // Photos measured before the ± existed have none: then the mean has none either.
+    return us.length && us.every((u) => typeof u === 'number') ? (us as number[]).reduce((a, b) => a + b, 0) / us.length : null;
+  };
   const uncertaintyOf = (zone: string) => {
     const us = rows.filter((r) => r.s.zone === zone && r.s.uncertainty !== null).map((r) => r.s.uncertainty!);
     return us.length ? us.reduce((a, b) => a + b, 0) / us.length : null;
   };
   const target = match.target
-    ? { zones: match.target.zones.map((z) => ({ ...z, flakeCoverage: flakeOf(z.name), uncertainty: uncertaintyOf(z.name) })), photos: targetPhotos }
+    ? { zones: match.target.zones.map((z) => ({ ...z, flakeCoverage: flakeOf(z.name), flakeCoverageUncertainty: flakeUncertaintyOf(z.name), uncertainty: uncertaintyOf(z.name) })), photos: targetPhotos }
     : null;
   // A reference photo uploaded but not yet measured (kept across reloads).
   const draft = reads.draft.get(args) ?? null;

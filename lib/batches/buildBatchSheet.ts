@@ -5,7 +5,8 @@ import { BATCH_SHEET_CAUTIONS, temperatureNote } from './safetyCautions';
 
 export type SheetRecipeLine = { zone: string; colorantId: string; colorant: string; kind: string; amount: number; unit: DoseUnit };
 export type SheetMold = { id: string; name: string; cavities: number; mlPerCavity: number; thickness: string };
-export type SheetZone = { name: string; lab: { l: number; a: number; b: number } | null; hex: string | null };
+/** `uncertainty`: the standard zone's own ± (ΔE00, about 95 %), when it was measured with one. */
+export type SheetZone = { name: string; lab: { l: number; a: number; b: number } | null; hex: string | null; uncertainty?: number | null };
 
 export type BatchSheetInput = {
   cups: number;
@@ -45,6 +46,7 @@ export function buildBatchSheet(input: BatchSheetInput) {
     zone: z.name,
     position,
     lab: z.lab,
+    uncertainty: z.uncertainty ?? null,
     hex: z.hex,
     cups: cupsOf(z.name),
     ml: cupsOf(z.name) * ML_PER_CUP,

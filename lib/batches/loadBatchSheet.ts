@@ -34,7 +34,7 @@ export async function loadBatchSheet(database: DB, teamId: string, batch: BatchV
     .filter((z) => samples.some((s) => s.zone === z.name) || recipe.some((l) => l.zone === z.name))
     .map((z) => {
       const s = samples.find((x) => x.zone === z.name);
-      return { name: z.name, lab: s ? { l: s.l, a: s.a, b: s.b } : null, hex: s?.hex ?? null };
+      return { name: z.name, lab: s ? { l: s.l, a: s.a, b: s.b } : null, hex: s?.hex ?? null, uncertainty: s?.uncertainty ?? null };
     });
   const planIds = (batch.plan ?? []).map((p) => p.moldId);
   const planRows = planIds.length
@@ -71,7 +71,11 @@ export async function loadBatchSheet(database: DB, teamId: string, batch: BatchV
     belowZero: batch.belowZero,
     match: { id: batch.matchId, name: batch.matchName, tolerance: batch.tolerance },
     // Per zone: ΔE00 (with its ±) against the standard and, when marked, against the reference in frame.
-    qc: batch.zones.map((z) => ({ name: z.name, dE00: z.dE00, uncertainty: z.uncertainty, band: z.band, inFrame: z.inFrame as { dE00: number; band: string; uncertainty?: number } | null })),
+    // Flake: the batch's coverage with its ± beside the standard's.
+    qc: batch.zones.map((z) => ({
+      name: z.name, dE00: z.dE00, uncertainty: z.uncertainty, band: z.band, inFrame: z.inFrame as { dE00: number; band: string; uncertainty?: number } | null,
+      flake: z.flake as { coverage: number; coverageUncertainty?: number } | null, standardFlake: z.standard?.flake ?? null,
+    })),
     standard: { pourId: std.id, number: std.number, moldId: std.moldId, batchCups: std.batchCups },
     ...sheet,
   };

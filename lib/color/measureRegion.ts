@@ -3,9 +3,11 @@ import { regionLuma } from './regionLuma';
 import { smearedFlake } from './smearedFlake';
 import { castAmbiguity } from './castAmbiguity';
 import { correctShading } from './correctShading';
+import { coverageUncertainty } from './coverageUncertainty';
 import { findOtherColour } from './findOtherColour';
 import { keepNearBase } from './keepNearBase';
 import { labToHex } from './labToHex';
+import { labToXyz } from './labToXyz';
 import { type FlakeInput, measureFlake } from './measureFlake';
 import { medianLab } from './medianLab';
 import { medianSpread } from './medianSpread';
@@ -49,7 +51,8 @@ export interface RegionContext {
  *    JPEG's luma Y' when only that differs: regionLuma, areaByLumaCode). With coarsely
  *    subsampled chroma (SMEAR_COMPRESSION) the base is read from behind the smear and the flake
  *    measured again against it (smearedFlake).
- * 7. The ± (regionUncertainty); spread = median CIEDE2000 of the kept pixels to the base.
+ * 7. The ± (regionUncertainty; coverageUncertainty for the flake's area); spread = median
+ *    CIEDE2000 of the kept pixels to the base.
  */
 export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): RegionMeasure {
   const { samples, gridW, gridH, cell, step } = rp;
@@ -92,7 +95,14 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
     kept: Math.round((keptCount * samples.pixels) / n),
     spread,
     glare: glareCount / n,
-    flake: { coverage, groups: flake.groups },
+    flake: {
+      coverage,
+      coverageUncertainty: coverageUncertainty({
+        xyz, bx: flake.bx, kept, glare, other: otherMask, coverage, step, compression: ctx.compression ?? 0,
+        flake: flake.groups.map((g) => ({ xyz: labToXyz(g.lab), share: g.share })),
+      }),
+      groups: flake.groups,
+    },
     uncertainty: regionUncertainty({
       spread,
       basePixels: nb,

@@ -64,7 +64,8 @@ export interface RegionMeasure {
   spread: number;
   /** Fraction (0..1) of the region's pixels taken as glare. */
   glare: number;
-  flake: { coverage: number; groups: FlakeGroup[] };
+  /** `coverageUncertainty`: the ± (about 95 %, k = 2) of `coverage`, a fraction of the area (coverageUncertainty). */
+  flake: { coverage: number; coverageUncertainty: number; groups: FlakeGroup[] };
   /** ΔE00 radius around `lab` holding the true base colour with about 95 % confidence (k = 2, JCGM 100:2008). */
   uncertainty: number;
   /** Range of L* that a smooth light fall-off across the region accounts for (0 when evenly lit). */

@@ -68,3 +68,9 @@ export const formatLab = (c: Lab) => `L* ${c.l.toFixed(1)} a* ${c.a.toFixed(1)} 
 
 /** °F with °C beside it: "340 °F (171 °C)". */
 export const formatTemp = (f: number) => `${trimmed(f, 0)} °F (${(((f - 32) * 5) / 9).toFixed(0)} °C)`;
+
+/** A share of an area (flake, glare) as a percentage, with its ± when it has one: "12.0 % ± 3.0 %". */
+export const formatShare = (v: number, u?: number | null) => `${(v * 100).toFixed(1)} %${u !== undefined && u !== null && Number.isFinite(u) ? ` ± ${(u * 100).toFixed(1)} %` : ''}`;
+
+/** A signed difference with its ± when it has one: "−1.20 ± 0.40" (U+2212 minus). */
+export const formatSigned = (v: number, u?: number | null) => `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(2)}${u !== undefined && u !== null && Number.isFinite(u) ? ` ± ${u.toFixed(2)}` : ''}`;

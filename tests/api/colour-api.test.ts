@@ -61,7 +61,13 @@ describe('POST /api/measure', () => {
     expect(r.lab.l).toBeCloseTo(40, 0);
     expect(r.hex).toMatch(/^#[0-9a-f]{6}$/);
     expect(r.pixels).toBeGreaterThan(0);
-    expect(r.flake).toMatchObject({ coverage: expect.any(Number), groups: expect.any(Array) });
+    expect(r.flake).toMatchObject({ coverage: expect.any(Number), coverageUncertainty: expect.any(Number), groups: expect.any(Array) });
+    // The coverage's ± (about 95 %, a fraction of the area): finite, not negative, and on a flat
+    // colour small enough to say "no flake" (coverage 0 within it).
+    expect(Number.isFinite(r.flake.coverageUncertainty)).toBe(true);
+    expect(r.flake.coverageUncertainty).toBeGreaterThanOrEqual(0);
+    expect(r.flake.coverageUncertainty).toBeLessThan(0.05);
+    expect(r.flake.coverage).toBeLessThanOrEqual(r.flake.coverageUncertainty);
     // API.md's ± and the new figures: an evenly lit, single-colour region with no card.
     expect(r.uncertainty).toBeGreaterThan(0);
     expect(r.uncertainty).toBeLessThan(1);

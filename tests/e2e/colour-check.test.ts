@@ -23,7 +23,8 @@ describe.runIf(browserAvailable())('browser: the colour check page', () => {
     expect(Number(m[1])).toBeCloseTo(45, 0);
     expect(Number(m[2])).toBeCloseTo(-20, 0);
     expect(Number(m[3])).toBeCloseTo(25, 0);
-    expect(text).toMatch(/Flake/);
+    // Flake coverage with its ± (coverageUncertainty): a flat colour has none, to within a little.
+    expect(text).toMatch(/Flake\s*\d+\.\d % ± \d+\.\d % of the region/);
     expect(text).toMatch(/Glare/);
 
     await page.getByLabel('Target (L* a* b*, or hex)').fill('50 2.6772 -79.7751');

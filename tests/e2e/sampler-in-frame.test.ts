@@ -135,6 +135,15 @@ describe.runIf(browserAvailable())('browser: the sampler warns live; the batch f
       expect((await page.getByRole('list', { name: 'Target colours' }).textContent())!.match(/± \d+\.\d\d ΔE00/g)).toHaveLength(2);
       const pourText = (await page.getByRole('region', { name: 'Pour #1 against the target' }).textContent())!;
       expect(pourText.match(/Pour L\* [^·]+ ± \d+\.\d\d ΔE00 · target L\* [^±]+ ± \d+\.\d\d ΔE00/g)).toHaveLength(2);
+      // The standard's colour carries its own ±; ΔL*, ΔC*, ΔH* and the flake coverage carry theirs,
+      // in the batch readout and in the pour's.
+      const resultText = (await result.textContent())!;
+      expect(resultText.match(/standard L\* [\d.−-]+ a\* [\d.−-]+ b\* [\d.−-]+ ± \d+\.\d\d ΔE00/g)).toHaveLength(2);
+      const components = /ΔL\* [+−]\d+\.\d\d ± \d+\.\d\d · ΔC\* [+−]\d+\.\d\d ± \d+\.\d\d · ΔH\* [+−]\d+\.\d\d ± \d+\.\d\d/g;
+      expect(resultText.match(components)).toHaveLength(2);
+      expect(pourText.match(components)).toHaveLength(2);
+      expect(resultText.match(/Flake \d+\.\d % ± \d+\.\d % · standard \d+\.\d % ± \d+\.\d %/g)).toHaveLength(2);
+      expect(pourText.match(/Flake \d+\.\d % ± \d+\.\d % \(target \d+\.\d % ± \d+\.\d %\)/g)).toHaveLength(2);
       await page.screenshot({ path: artifactPath(`batch-in-frame-result-${viewport.width}.png`), fullPage: true });
 
       const batchId = new URL(page.url()).searchParams.get('batch');
@@ -151,6 +160,8 @@ describe.runIf(browserAvailable())('browser: the sampler warns live; the batch f
       // Header + back + belly; each zone row has two ΔE00 ± figures (standard, retained standard in frame).
       expect(rows).toHaveLength(3);
       for (const r of rows.slice(1)) expect(r.match(/\d+\.\d\d ± \d+\.\d\d/g)).toHaveLength(2);
+      // The standard's colour on the sheet's swatches carries its ±.
+      expect((await page.locator('section[aria-labelledby="sheet-layout"]').textContent())!.match(/L\* [\d.−-]+ a\* [\d.−-]+ b\* [\d.−-]+ ± \d+\.\d\d ΔE00/g)).toHaveLength(2);
       await page.screenshot({ path: artifactPath(`batch-sheet-in-frame-${viewport.width}.png`), fullPage: true });
     });
   }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatCups, formatDay, formatDeltaE, formatDose, formatLab, formatMl, formatTemp, formatWhen, spoonFraction } from '../../lib/format';
+import { formatCups, formatDay, formatDeltaE, formatDose, formatLab, formatMl, formatShare, formatSigned, formatTemp, formatWhen, spoonFraction } from '../../lib/format';
 import { ML_PER_TSP, convertDose, parseAmount } from '../../lib/recipes';
 
 const value = (s: string | number) => {
@@ -82,6 +82,12 @@ describe('formatters: one way to write a figure', () => {
     expect(formatLab({ l: 38, a: -10.04, b: 22.05 })).toBe('L* 38.0 a* -10.0 b* 22.1');
     // (340 − 32) × 5/9 = 171.1 °C
     expect(formatTemp(340)).toBe('340 °F (171 °C)');
+    // Shares and signed differences with their ± when there is one.
+    expect(formatShare(0.1234, 0.0301)).toBe('12.3 % ± 3.0 %');
+    expect(formatShare(0.1234)).toBe('12.3 %');
+    expect(formatShare(0.1234, null)).toBe('12.3 %');
+    expect(formatSigned(-1.204, 0.396)).toBe('−1.20 ± 0.40');
+    expect(formatSigned(0.5)).toBe('+0.50');
   });
   it('writes dates in the shop’s time zone, whatever the server’s', () => {
     const at = Date.UTC(2025, 2, 12, 14, 5);
