@@ -24,6 +24,14 @@ export const GLARE_MIN_LENGTH = 12;
 export const GLARE_SOLID = 0.15;
 /** …and mostly blown out: at least this share of its pixels clipped in a channel. */
 export const GLARE_BLOWN = 0.5;
+/**
+ * A clipped pixel is a highlight only when it is less colourful than the region (chroma at most
+ * GLARE_CLIP_C × the median): a highlight adds the light's own near-white colour, while more
+ * light on a saturated colour (the lit side of a shaded body) clips its strongest channel and
+ * keeps its chroma. Regions greyer than GLARE_GREY_C (C*ab) cannot tell the two apart.
+ */
+export const GLARE_CLIP_C = 0.85;
+export const GLARE_GREY_C = 10;
 /** Pixels within this distance of glare (its blurred fringe) are glare too, when lighter than the
  * region's median L* by GLARE_FRINGE_DL. */
 export const GLARE_FRINGE = 2;
@@ -47,12 +55,14 @@ export function findGlareByShape(rp: RegionPixels): Uint8Array {
   const chroma = new Float64Array(size);
   for (let i = 0; i < size; i++) chroma[i] = Math.sqrt(lab[i * 3 + 1] * lab[i * 3 + 1] + lab[i * 3 + 2] * lab[i * 3 + 2]);
   const medL = weightedMedian(lab, counts, { range: [-1, 110], step: 0.05, stride: 3, offset: 0 });
-  const cMax = GLARE_C_RATIO * weightedMedian(chroma, counts, { range: [0, 200], step: 0.05 }) + GLARE_C_OFFSET;
+  const medC = weightedMedian(chroma, counts, { range: [0, 200], step: 0.05 });
+  const cMax = GLARE_C_RATIO * medC + GLARE_C_OFFSET;
+  const cClip = medC < GLARE_GREY_C ? Infinity : GLARE_CLIP_C * medC;
   const bright = new Uint8Array(size);
   const washedL = Math.max(medL + GLARE_WASHED_DL, GLARE_WASHED_L);
   for (let i = 0; i < size; i++) {
     const l = lab[i * 3];
-    bright[i] = (clipped[i] && l >= medL + GLARE_DL) || (chroma[i] <= cMax && l >= washedL) ? 1 : 0;
+    bright[i] = (clipped[i] && l >= medL + GLARE_DL && chroma[i] <= cClip) || (chroma[i] <= cMax && l >= washedL) ? 1 : 0;
   }
   const mask = new Uint8Array(gridW * gridH);
   let any = 0;

@@ -10,6 +10,16 @@ import { xyzToLab } from './xyzToLab';
 /** Flake samples farther than this many keep-thresholds from the base are whole flake (core). */
 export const FLAKE_CORE = 2;
 
+/**
+ * Noise alone leaves a few pixels past the keep threshold, on every side of the base and none far
+ * out: flake needs at least this many core pixels (and this share of the region), or off pixels
+ * that lean one way (oneSided). Ours, from plain synthetic photos (tests/color/realPhotos.test.ts).
+ */
+export const MIN_CORE = 3;
+export const MIN_CORE_SHARE = 0.0005;
+/** Off pixels lean one way when their mean offset from the base is at least this share of their mean distance. Ours. */
+export const ONE_SIDED = 0.5;
+
 export interface FlakeInput {
   lab: Float32Array;
   xyz: Float32Array;
@@ -28,7 +38,7 @@ export interface FlakeInput {
   /** The groups are one flake colour seen through smeared chroma (isOneSmearedFlake): keep the one farthest from the base. */
   oneColour?: boolean;
   /** With subsampled chroma: every pixel's luma Y' and the base's (regionLuma), for areaByLumaCode. */
-  luma?: Omit<LumaCodeInput, 'flake'>;
+  luma?: () => Omit<LumaCodeInput, 'flake'> | null;
 }
 
 /**
@@ -36,7 +46,8 @@ export interface FlakeInput {
  * colour groups come from clusterFlake (on the core, clear of blended edges, when there is one),
  * each group's pure colour from flakeEndmembers, and the area by linear unmixing in linear light
  * (unmixCoverage) of the summed deviation from the base of every pixel but glare and other: a
- * pixel that is part flake counts by its part. With subsampled chroma and one flake colour of a
+ * pixel that is part flake counts by its part. Off pixels that noise explains (no core, no lean
+ * to one side) are no flake. With subsampled chroma and one flake colour of a
  * clearly different lightness, the area comes from luminance alone (areaByLuma). Returns the area
  * in sampled pixels.
  */
@@ -55,7 +66,7 @@ export function measureFlake(x: FlakeInput): { area: number; groups: FlakeGroup[
     coreCount += core[k];
     flakeIdx[k++] = i;
   }
-  if (flakeCount === 0) return { area: 0, groups: [] };
+  if (flakeCount === 0 || (coreCount < Math.max(MIN_CORE, MIN_CORE_SHARE * n) && !oneSided(fl, base))) return { area: 0, groups: [] };
   const samples: ColorSamples = { rgb: new Uint8Array(0), lab: fl, counts: new Uint32Array(flakeCount).fill(1), size: flakeCount, total: flakeCount, pixels: flakeCount };
   const all = clusterFlake(samples, coreCount > 0 ? core : new Uint8Array(flakeCount).fill(1), base);
   const far = (g: { lab: Lab }) => (g.lab.l - base.l) ** 2 + (g.lab.a - base.a) ** 2 + (g.lab.b - base.b) ** 2;
@@ -71,10 +82,11 @@ export function measureFlake(x: FlakeInput): { area: number; groups: FlakeGroup[
   }
   const byLuma = x.lumaArea && ends.length === 1 ? areaByLuma(sum[1], counted, bx[1], ends[0].xyz[1]) : null;
   if (byLuma !== null) return { area: byLuma, groups: [{ lab: ends[0].lab, hex: labToHex(ends[0].lab), share: 1 }] };
-  if (x.lumaArea && x.luma && ends.length === 1) {
+  const luma = x.lumaArea && ends.length === 1 ? x.luma?.() : null;
+  if (luma) {
     const flake = new Uint8Array(n);
     for (let i = 0; i < n; i++) flake[i] = off[i] && !other[i] ? 1 : 0;
-    const area = areaByLumaCode({ ...x.luma, flake });
+    const area = areaByLumaCode({ ...luma, flake });
     // Its colour: the base plus the region's mean deviation over the area (linear mixing), which
     // the smear keeps, where the cores' own chroma has been spread away.
     if (area !== null && area <= counted) {
@@ -89,4 +101,16 @@ export function measureFlake(x: FlakeInput): { area: number; groups: FlakeGroup[
     .filter((g) => g.share > 0)
     .sort((g, h) => h.share - g.share);
   return { area, groups };
+}
+
+/** Whether the off pixels (Lab, interleaved) sit mostly on one side of the base, as flake does and noise does not. */
+function oneSided(fl: Float64Array, base: Lab): boolean {
+  const m = fl.length / 3;
+  let sl = 0, sa = 0, sb = 0, dist = 0;
+  for (let k = 0; k < m; k++) {
+    const dl = fl[k * 3] - base.l, da = fl[k * 3 + 1] - base.a, db = fl[k * 3 + 2] - base.b;
+    sl += dl; sa += da; sb += db;
+    dist += Math.sqrt(dl * dl + da * da + db * db);
+  }
+  return Math.hypot(sl, sa, sb) >= ONE_SIDED * dist;
 }

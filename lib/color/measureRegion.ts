@@ -1,5 +1,5 @@
 import type { Mat3, RegionMeasure, Vec3 } from './types';
-import { regionLuma } from './regionLuma';
+import { type RegionLuma, regionLuma } from './regionLuma';
 import { smearedFlake } from './smearedFlake';
 import { castAmbiguity } from './castAmbiguity';
 import { correctShading } from './correctShading';
@@ -80,10 +80,13 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
     return { base, bx, ...measureFlake({ lab, xyz, dist, keepWithin, off, other: otherMask, glare, base, bx, lumaArea: ctx.subsampled ?? false, oneColour, luma }) };
   };
   // With subsampled chroma (JPEG 4:2:0) each pixel's luma is still its own: read it once.
-  const rl = ctx.subsampled && ctx.toXyz && step === 1 ? regionLuma(xyz, glare, otherMask, truly.mask, rp, ctx.toXyz) : null;
-  let flake = flakeOf(truly.xyz, false, rl?.luma);
+  // (Only when a step needs it: it costs a conversion of every pixel.)
+  let rl: RegionLuma | null | undefined;
+  const getLuma = () => (rl === undefined ? (rl = ctx.subsampled && ctx.toXyz && step === 1 ? regionLuma(xyz, glare, otherMask, truly.mask, rp, ctx.toXyz) : null) : rl);
+  let flake = flakeOf(truly.xyz, false, () => getLuma()?.luma ?? null);
   // Coarse chroma tints every pixel near a speck and spreads a speck's colour: read through the luma.
-  if (rl && ctx.toXyz && (ctx.compression ?? 0) >= SMEAR_COMPRESSION && flake.groups.length > 0) flake = smearedFlake(rl, truly.mask, rp, ctx.toXyz, flakeOf) ?? flake;
+  const coarse = ctx.toXyz && (ctx.compression ?? 0) >= SMEAR_COMPRESSION && flake.groups.length > 0 ? getLuma() : null;
+  if (coarse && ctx.toXyz) flake = smearedFlake(coarse, truly.mask, rp, ctx.toXyz, flakeOf) ?? flake;
   const base = flake.base;
   const coverage = Math.min(flake.area / n, (n - glareCount - otherCount) / n);
   const spread = medianSpread(lab, kept, base, keptCount);

@@ -1,12 +1,12 @@
 import type { Mat3 } from './types';
 import { type LumaChroma, lumaChroma } from './lumaChroma';
-import type { FlakeInput } from './measureFlake';
+import type { LumaCodeInput } from './areaByLumaCode';
 import type { RegionPixels } from './regionPixels';
 
 export interface RegionLuma {
   ycc: LumaChroma;
   /** What measureFlake needs to read an area from luma (areaByLumaCode). */
-  luma: NonNullable<FlakeInput['luma']>;
+  luma: Omit<LumaCodeInput, 'flake'>;
 }
 
 /**

@@ -24,7 +24,8 @@ export function smearedFlake(rl: RegionLuma, truly: Uint8Array, rp: RegionPixels
   const base = baseBehindSmear({ ycc: rl.ycc, cell: rp.cell, gridW: rp.gridW, gridH: rp.gridH, base: truly });
   if (!base || base.se > SE_MAX) return null;
   const bx = applyMat3(toXyz, base.rgb);
-  const luma = { ...rl.luma, base: base.y, noise: base.noise };
+  const read = { ...rl.luma, base: base.y, noise: base.noise };
+  const luma = () => read;
   const again = flakeOf(bx, false, luma);
   if (again.groups.length <= 1) return again;
   const toRgb = invertMat3(toXyz);

@@ -6,7 +6,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { deltaE2000 } from '@/lib/color';
 import { measurePhoto } from '@/lib/image';
 import { castMatrix, colourAtDistance, labToLin, LIGHTS, type Light, makePhoto, meteredExposure } from '../support/photoGen';
-import { BASES, covered, measureSpec, median, type Outcome } from '../support/photoCases';
+import { BASES, covered, FLAKES, measureSpec, median, type Outcome } from '../support/photoCases';
 
 describe('shading ±15–25 % (issue 11 table, row 2)', () => {
   const out: Outcome[] = [];
@@ -31,6 +31,40 @@ describe('shading ±15–25 % (issue 11 table, row 2)', () => {
     const o = await measureSpec('flat', { seed: 990, base: BASES.green, blur: 0.6, format: 'jpeg90' });
     expect(o.out.regions[0].shading).toBe(0);
   });
+});
+
+// Every base, flat and shaded, in every format: noise alone leaves a few pixels past the keep
+// threshold on every side of the base (a dark, noisy base most), which is no flake; and the lit
+// side of a pale saturated base clips its strongest channel (bubblegum's red), which is no glare.
+describe('plain photos, flat and shaded, PNG and JPEG q90 and q75', () => {
+  const out: Outcome[] = [];
+  beforeAll(async () => {
+    let seed = 2900;
+    for (const [name, base] of Object.entries(BASES))
+      for (const shading of [0, 0.15, 0.2, 0.25])
+        for (const format of ['png', 'jpeg90', 'jpeg75'] as const)
+          out.push(await measureSpec(`${name} ±${shading * 100} % ${format}`, { seed: seed++, base, shading, blur: 0.6, format }));
+  }, 300_000);
+
+  it('report no flake (≤ 0.02) and no glare (≤ 0.02), and keep the base within ΔE00 1.0', () => {
+    expect(out.filter((o) => o.out.regions[0].flake.coverage > 0.02).map((o) => `${o.label}: ${o.out.regions[0].flake.coverage.toFixed(3)}`)).toEqual([]);
+    expect(out.filter((o) => o.out.regions[0].glare > 0.02).map((o) => `${o.label}: ${o.out.regions[0].glare.toFixed(3)}`)).toEqual([]);
+    expect(out.filter((o) => o.error > 1.0).map((o) => `${o.label}: ${o.error.toFixed(2)}`)).toEqual([]);
+  });
+});
+
+describe('flake on a shaded pale body whose red clips on the lit side (640 × 480, on a lattice)', () => {
+  it.each([
+    ['black', 'bubblegum'],
+    ['blue', 'bubblegum'],
+    ['black', 'pumpkin'],
+  ] as const)('%s flake, 20 %, on %s shaded ±20 %: no glare, base within ΔE00 1.0, coverage within ±0.04', async (flake, base) => {
+    const o = await measureSpec(`${flake} on ${base}`, { seed: 2990, width: 640, height: 480, base: BASES[base], flake: { colours: [FLAKES[flake].colour], coverage: 0.2, sizes: [1, 3] }, shading: 0.2, blur: 0.6, format: 'jpeg90' });
+    const r = o.out.regions[0];
+    expect(r.glare).toBeLessThanOrEqual(0.02);
+    expect(o.error).toBeLessThan(1);
+    expect(Math.abs(r.flake.coverage - o.truth.coverage)).toBeLessThanOrEqual(0.04);
+  }, 60_000);
 });
 
 describe('laminate line, region 0–24 px over (issue 11 table, row 3)', () => {
