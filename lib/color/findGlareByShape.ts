@@ -22,6 +22,8 @@ export const GLARE_MIN_LENGTH = 12;
 /** A highlight is solid: at least this share of its pixels have all eight neighbours in it too
  * (touching specks of silver flake make spindly clusters). */
 export const GLARE_SOLID = 0.15;
+/** On a lattice, a sample whose full-resolution neighbours within 1 px differ by at most this many codes is inside a solid highlight. Ours. */
+export const GLARE_SMOOTH = 24;
 /** …and mostly blown out: at least this share of its pixels clipped in a channel. */
 export const GLARE_BLOWN = 0.5;
 /**
@@ -76,13 +78,18 @@ export function findGlareByShape(rp: RegionPixels): Uint8Array {
   const inner = boxMorphology(mask, gridW, gridH, 1, 'erode');
   const solid = new Array<number>(area.length).fill(0);
   const blown = new Array<number>(area.length).fill(0);
-  for (let c = 0; c < inner.length; c++) if (inner[c]) solid[labels[c] - 1]++;
+  if (step > 1 && rp.rough) {
+    // On a lattice the neighbours in the grid are step pixels apart: a sample is inside a solid
+    // highlight when its full-resolution neighbours within 1 px are alike (regionPixels' rough).
+    const near = rp.rough[0];
+    for (let i = 0; i < n; i++) if (labels[cell[i]] && near[i] <= GLARE_SMOOTH) solid[labels[cell[i]] - 1]++;
+  } else for (let c = 0; c < inner.length; c++) if (inner[c]) solid[labels[c] - 1]++;
   for (let i = 0; i < n; i++) if (clipped[sample[i]] && labels[cell[i]]) blown[labels[cell[i]] - 1]++;
   const isGlare = area.map((a, k) => {
     const [x0, y0, x1, y1] = box[k];
     const length = Math.hypot(x1 - x0 + 1, y1 - y0 + 1) * step;
     const big = a * step * step >= GLARE_MIN_AREA || length >= GLARE_MIN_LENGTH;
-    return big && blown[k] >= GLARE_BLOWN * a && (step > 1 || solid[k] >= GLARE_SOLID * a);
+    return big && blown[k] >= GLARE_BLOWN * a && (solid[k] >= GLARE_SOLID * a || (step > 1 && !rp.rough));
   });
   if (!isGlare.some(Boolean)) return glare;
   const core = new Uint8Array(gridW * gridH);

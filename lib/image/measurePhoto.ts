@@ -88,12 +88,18 @@ function sampleRegion(window: PixelWindow, spans: Int32Array, toXyz: Mat3, profi
   return rp.samples.total > 0 || step === 1 ? rp : regionPixels(window, spans, toXyz, 1, profile.linear);
 }
 
-/** A lattice reading with at least this much flake in a subsampled photo is read again on patches. Ours. */
+/**
+ * A lattice reading with at least this much flake in a coarsely subsampled photo (SMEAR_COMPRESSION)
+ * is read again on patches; in a finer one, only this dense flake tints enough of the base to
+ * matter (tests/color/samples.test.ts). Ours.
+ */
 export const PATCH_FLAKE_MIN = 0.01;
+export const PATCH_FLAKE_DENSE = 0.12;
 
 // Subsampled chroma (JPEG 4:2:0) spreads a fine speck's colour over its neighbours, which a
 // lattice does not see: the base and flake are read again on patches of every pixel (patchSample,
-// about twice the lattice's pixels), where smearedFlake can model the smear. Glare, the second
+// about twice the lattice's pixels), where each pixel's neighbours and its own luma are seen
+// (trulyBase, regionLuma) and smearedFlake can model the smear. Glare, the second
 // colour and the shading stay the lattice's, read over the whole region.
 function withPatches(m: RegionMeasure, window: PixelWindow, spans: Int32Array, profile: RgbProfile, ctx: RegionContext, maxSamples: number): RegionMeasure {
   const patches = patchSample(window, spans, 2 * maxSamples);
@@ -149,7 +155,7 @@ export async function measurePhoto(
     const rp = sampleRegion(window, spans[i], toXyz, profile, maxSamples);
     if (blackClippedShare(rp.samples) >= BLACK_CLIP_WARNING) clippedBlack.push(r.name);
     const m = measureRegion(rp, ctx);
-    const smeared = subsampled && compression >= SMEAR_COMPRESSION && rp.step > 1 && m.flake.coverage >= PATCH_FLAKE_MIN;
+    const smeared = subsampled && rp.step > 1 && m.flake.coverage >= (compression >= SMEAR_COMPRESSION ? PATCH_FLAKE_MIN : PATCH_FLAKE_DENSE);
     return { name: r.name, ...(smeared ? withPatches(m, window, spans[i], profile, ctx, maxSamples) : m) };
   });
   const clipWarning = clippedBlack.length

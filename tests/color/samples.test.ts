@@ -104,15 +104,17 @@ describe('the default lattice on a realistic large photo (tests/support/photoGen
 });
 
 // A lattice sees one pixel in every few and cannot tell a sampled pixel tinted by a speck's
-// smeared chroma (JPEG q75, 4:2:0) from base: with flake in such a photo the base and flake are
-// read again on patches of every pixel (patchSample). Seeds and sizes not used elsewhere.
-describe('fine flake in a large JPEG q75 photo, read on patches', () => {
+// smeared chroma (JPEG 4:2:0) from base: with flake in a JPEG q75 photo, or dense flake at q90,
+// the base and flake are read again on patches of every pixel (patchSample). Seeds and sizes not
+// used elsewhere.
+describe('fine flake in a large JPEG photo, read on patches', () => {
   it.each([
-    ['blue flake on the dark blue base (one L*)', { l: 35, a: 5, b: -25 }, { l: 35, a: 15, b: -60 }],
-    ['blue flake on green', { l: 55, a: -30, b: 25 }, { l: 35, a: 15, b: -60 }],
-    ['black flake on pumpkin', { l: 62, a: 30, b: 55 }, { l: 8, a: 0, b: 0 }],
-  ])('%s, 20 %, 800 × 600: base within ΔE00 1.0, coverage within ±0.04, the ± holding', async (_n, base, colour) => {
-    const t = await makePhoto({ seed: 91, width: 800, height: 600, base, flake: { colours: [colour], coverage: 0.2, sizes: [1, 3] }, blur: 0.6, format: 'jpeg75' });
+    { name: 'blue flake on the dark blue base (one L*)', base: { l: 35, a: 5, b: -25 }, colour: { l: 35, a: 15, b: -60 }, format: 'jpeg75' },
+    { name: 'blue flake on green', base: { l: 55, a: -30, b: 25 }, colour: { l: 35, a: 15, b: -60 }, format: 'jpeg75' },
+    { name: 'black flake on pumpkin', base: { l: 62, a: 30, b: 55 }, colour: { l: 8, a: 0, b: 0 }, format: 'jpeg75' },
+    { name: 'blue flake on the dark blue base (one L*)', base: { l: 35, a: 5, b: -25 }, colour: { l: 35, a: 15, b: -60 }, format: 'jpeg90' },
+  ] as const)('$name, 20 %, 800 × 600, $format: base within ΔE00 1.0, coverage within ±0.04, the ± holding', async ({ base, colour, format }) => {
+    const t = await makePhoto({ seed: 91, width: 800, height: 600, base, flake: { colours: [colour], coverage: 0.2, sizes: [1, 3] }, blur: 0.6, format });
     const m = (await measurePhoto(t.file, [{ name: 'z', shape: t.region }])).regions[0];
     expect(m.pixels).toBeGreaterThan(20 * DEFAULT_MAX_SAMPLES); // so the lattice is sparse
     expect(deltaE2000(m.lab, t.lab)).toBeLessThan(1);
