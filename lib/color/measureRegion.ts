@@ -83,9 +83,12 @@ export function measureRegion(rp: RegionPixels, ctx: RegionContext = {}): Region
   // (Only when a step needs it: it costs a conversion of every pixel.)
   let rl: RegionLuma | null | undefined;
   const getLuma = () => (rl === undefined ? (rl = ctx.subsampled && ctx.toXyz && step === 1 ? regionLuma(xyz, glare, otherMask, truly.mask, rp, ctx.toXyz) : null) : rl);
-  let flake = flakeOf(truly.xyz, false, () => getLuma()?.luma ?? null);
-  // Coarse chroma tints every pixel near a speck and spreads a speck's colour: read through the luma.
-  const coarse = ctx.toXyz && (ctx.compression ?? 0) >= SMEAR_COMPRESSION && flake.groups.length > 0 ? getLuma() : null;
+  // Coarse chroma tints every pixel near a speck and spreads a speck's colour: read through the
+  // luma. (Finer, the flake's own pixels keep enough of its colour to unmix: a mixture's luma can
+  // overshoot both colours, which luma alone cannot read.)
+  const smeared = (ctx.compression ?? 0) >= SMEAR_COMPRESSION;
+  let flake = flakeOf(truly.xyz, false, smeared ? () => getLuma()?.luma ?? null : undefined);
+  const coarse = ctx.toXyz && smeared && flake.groups.length > 0 ? getLuma() : null;
   if (coarse && ctx.toXyz) flake = smearedFlake(coarse, truly.mask, rp, ctx.toXyz, flakeOf) ?? flake;
   const base = flake.base;
   const coverage = Math.min(flake.area / n, (n - glareCount - otherCount) / n);
