@@ -1,8 +1,8 @@
 // Fine flake on realistic synthetic photos (tests/support/photoGen.ts): 1–3 px specks of black,
 // blue and silver at 2–20 % coverage on five bases, lens blur, sensor noise, JPEG q90 4:2:0.
 // Truth: culori lab65 of the scene; ΔE00 cross-checked with colorjs.io. Targets: issue 11's table.
-import { beforeAll, describe, expect, it } from 'vitest';
-import { BASES, colorjsDe00, covered, FLAKES, measureSpec, median, type Outcome } from '../support/photoCases';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { BASES, colorjsDe00, covered, FLAKES, measureSpec, median, type Outcome, printFigures } from '../support/photoCases';
 
 const COVERAGES = [0.02, 0.05, 0.1, 0.2];
 const results: Outcome[] = [];
@@ -26,6 +26,7 @@ beforeAll(async () => {
 }, 300_000);
 
 describe('fine flake (issue 11 table, row 1), JPEG q90', () => {
+  afterAll(() => printFigures('fine flake, JPEG q90', results));
   it('base within ΔE00 1.5 of the truth on every photo, median within 0.7', () => {
     const bad = results.filter((r) => r.error > 1.5).map((r) => `${r.label}: ${r.error.toFixed(2)}`);
     expect(bad).toEqual([]);
@@ -67,6 +68,7 @@ describe('fine flake (issue 11 table, row 1), JPEG q90', () => {
 // seeds, never used to set any constant, is held to the same limits.
 describe('fine flake at JPEG q75', () => {
   const sets: Outcome[][] = [[], []];
+  afterAll(() => sets.forEach((set, k) => printFigures(`fine flake, JPEG q75, set ${k}`, set)));
   beforeAll(async () => {
     for (const [k, seed0, coverages] of [[0, 500, [0.05, 0.2]], [1, 7000, [0.02, 0.1, 0.15, 0.2]]] as const) {
       let seed = seed0;

@@ -2,14 +2,15 @@
 // synthetic photos (tests/support/photoGen.ts). Truth: culori lab65 of the scene. Targets: issue
 // 11's table; the ± (uncertainty) must hold the true error in ≥ 90 % of regions.
 import { converter } from 'culori';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { deltaE2000 } from '@/lib/color';
 import { measurePhoto } from '@/lib/image';
 import { castMatrix, colourAtDistance, labToLin, LIGHTS, type Light, makePhoto, meteredExposure } from '../support/photoGen';
-import { BASES, covered, FLAKES, measureSpec, median, type Outcome } from '../support/photoCases';
+import { BASES, covered, FLAKES, measureSpec, median, type Outcome, printFigures } from '../support/photoCases';
 
 describe('shading ±15–25 % (issue 11 table, row 2)', () => {
   const out: Outcome[] = [];
+  afterAll(() => printFigures('shading ±15–25 %', out));
   beforeAll(async () => {
     let seed = 900;
     for (const [name, base] of Object.entries(BASES))
@@ -38,6 +39,7 @@ describe('shading ±15–25 % (issue 11 table, row 2)', () => {
 // side of a pale saturated base clips its strongest channel (bubblegum's red), which is no glare.
 describe('plain photos, flat and shaded, PNG and JPEG q90 and q75', () => {
   const out: Outcome[] = [];
+  afterAll(() => printFigures('plain, flat and shaded, PNG/q90/q75', out));
   beforeAll(async () => {
     let seed = 2900;
     for (const [name, base] of Object.entries(BASES))
@@ -70,6 +72,7 @@ describe('flake on a shaded pale body whose red clips on the lit side (640 × 48
 describe('laminate line, region 0–24 px over (issue 11 table, row 3)', () => {
   const bellies = { pearl: { l: 92, a: -1, b: 6 }, white: { l: 95, a: 0, b: 2 }, red: { l: 45, a: 55, b: 35 }, black: { l: 15, a: 0, b: 0 } };
   const out: (Outcome & { over: number })[] = [];
+  afterAll(() => printFigures('laminate line 0–24 px over', out));
   beforeAll(async () => {
     let seed = 1000;
     for (const [name, base] of Object.entries(BASES))
@@ -103,6 +106,7 @@ describe('laminate line, region 0–24 px over (issue 11 table, row 3)', () => {
 
 describe('casts with the grey card, both kinds (issue 11 table, row 4)', () => {
   const out: (Outcome & { light: Light; kind: string; belowBlack: boolean })[] = [];
+  afterAll(() => printFigures('casts with the card', out));
   beforeAll(async () => {
     let seed = 1100;
     for (const light of ['tungsten', 'shade', 'fluorescent', 'green fluorescent'] as Light[])
@@ -157,6 +161,8 @@ describe('casts with the grey card, both kinds (issue 11 table, row 4)', () => {
 });
 
 describe('Display P3 outside sRGB (issue 11 table, row 5)', () => {
+  const seen: { format: string; error: number }[] = [];
+  afterAll(() => console.log(`[figures, P3 outside sRGB] ${seen.map((x) => `${x.format} ${x.error.toFixed(2)}`).join(', ')}`));
   it.each(['png', 'jpeg90'] as const)('a saturated chartreuse outside sRGB reads within ΔE00 1.0 (%s)', async (format) => {
     const chartreuse = { l: 88, a: -52, b: 95 };
     const rgb = converter('rgb')({ mode: 'lab65', ...chartreuse });
@@ -165,12 +171,18 @@ describe('Display P3 outside sRGB (issue 11 table, row 5)', () => {
     expect(Math.min(p3.r, p3.g, p3.b)).toBeGreaterThanOrEqual(0); // inside Display P3
     expect(Math.max(p3.r, p3.g, p3.b)).toBeLessThanOrEqual(1);
     const o = await measureSpec('p3', { seed: 1200, base: chartreuse, gamut: 'p3', blur: 0.6, format, noise: { read: 0.001, shot: 0.0001 } });
+    seen.push({ format, error: o.error });
     expect(o.error).toBeLessThanOrEqual(1.0);
   });
 });
 
 describe('a known difference between two photos (issue 11 table, row 6)', () => {
   const rows: { truth: number; measured: number; u: number }[] = [];
+  afterAll(() => {
+    const off = (t: number) => median(rows.filter((r) => Math.abs(r.truth - t) < 0.2).map((r) => Math.abs(r.measured - r.truth)));
+    const held = rows.filter((r) => Math.abs(r.measured - r.truth) <= r.u).length;
+    console.log(`[figures, known difference] ${rows.length} pairs: median |error| ${off(1).toFixed(2)} at ΔE00 1.0, ${off(2.5).toFixed(2)} at 2.5; the ± holds ${held}/${rows.length}`);
+  });
   beforeAll(async () => {
     let seed = 1300;
     const dirs = [{ l: 1, a: 0, b: 0 }, { l: 0, a: 1, b: 0 }, { l: 0, a: 0, b: 1 }, { l: -0.5, a: 0.5, b: -0.7 }];

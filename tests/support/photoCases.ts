@@ -53,3 +53,19 @@ export const median = (xs: number[]) => {
 
 /** Share of outcomes whose true error lies inside the region's ± (uncertainty). */
 export const covered = (xs: Outcome[]) => xs.filter((o) => o.error <= o.out.regions[0].uncertainty).length / xs.length;
+
+/**
+ * One line of the figures a table row asks for (median and worst base ΔE00, coverage within
+ * ±0.04, worst glare, share of regions whose ± holds the true error, median ±), printed by the
+ * tests so a run shows them beside the pass/fail.
+ */
+export function printFigures(row: string, xs: Outcome[]): void {
+  if (xs.length === 0) return;
+  const r = (o: Outcome) => o.out.regions[0];
+  const within = xs.filter((o) => Math.abs(r(o).flake.coverage - o.truth.coverage) <= 0.04).length;
+  console.log(
+    `[figures, ${row}] ${xs.length} photos: base ΔE00 median ${median(xs.map((o) => o.error)).toFixed(2)}, worst ${Math.max(...xs.map((o) => o.error)).toFixed(2)}; ` +
+      `coverage within ±0.04 on ${within}/${xs.length}; glare worst ${Math.max(...xs.map((o) => r(o).glare)).toFixed(3)}; ` +
+      `± holds ${(covered(xs) * 100).toFixed(0)} %, median ± ${median(xs.map((o) => r(o).uncertainty)).toFixed(2)}`,
+  );
+}
