@@ -9,7 +9,6 @@ const SHRINK = 1.5;
 /** Kernel bandwidth of the local fit, as a share of the flake's luma contrast (99th percentile of |x|; ours). */
 const LOCAL = 0.3;
 
-
 export interface SmearInput {
   /** Every pixel's Y'CbCr (lumaChroma; NaN where not usable: glare and the second colour). */
   ycc: LumaChroma;
@@ -171,24 +170,18 @@ function invert3(a: Float64Array): Float64Array | null {
 function blur(src: Float64Array, w: number, h: number, sigma: number): Float64Array {
   const r = Math.ceil(2.5 * sigma);
   const k = Array.from({ length: 2 * r + 1 }, (_, i) => Math.exp(-0.5 * ((i - r) / sigma) ** 2));
-  const tmp = new Float64Array(src.length), out = new Float64Array(src.length);
-  for (let yy = 0; yy < h; yy++)
-    for (let xx = 0; xx < w; xx++) {
-      let s = 0;
-      for (let j = -r; j <= r; j++) {
-        const xj = xx + j;
-        if (xj >= 0 && xj < w) s += k[j + r] * src[yy * w + xj];
+  // One pass along x (step 1, length w) or y (step w, length h).
+  const pass = (from: Float64Array, along: 'x' | 'y') => {
+    const to = new Float64Array(from.length);
+    const [len, stride] = along === 'x' ? [w, 1] : [h, w];
+    for (let yy = 0; yy < h; yy++)
+      for (let xx = 0; xx < w; xx++) {
+        const at = along === 'x' ? xx : yy;
+        let s = 0;
+        for (let j = Math.max(-r, -at); j <= Math.min(r, len - 1 - at); j++) s += k[j + r] * from[yy * w + xx + j * stride];
+        to[yy * w + xx] = s;
       }
-      tmp[yy * w + xx] = s;
-    }
-  for (let yy = 0; yy < h; yy++)
-    for (let xx = 0; xx < w; xx++) {
-      let s = 0;
-      for (let j = -r; j <= r; j++) {
-        const yj = yy + j;
-        if (yj >= 0 && yj < h) s += k[j + r] * tmp[yj * w + xx];
-      }
-      out[yy * w + xx] = s;
-    }
-  return out;
+    return to;
+  };
+  return pass(pass(src, 'x'), 'y');
 }
