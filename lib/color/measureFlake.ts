@@ -17,6 +17,8 @@ export const FLAKE_CORE = 2;
  */
 export const MIN_CORE = 3;
 export const MIN_CORE_SHARE = 0.0005;
+/** The flake's area cannot be much more than the pixels that differ from the base: past this many times their count, the unmixing has gone astray. Ours. */
+export const AREA_CAP = 1.5;
 /** Off pixels lean one way when their mean offset from the base is at least this share of their mean distance. Ours. */
 export const ONE_SIDED = 0.5;
 
@@ -96,6 +98,10 @@ export function measureFlake(x: FlakeInput): { area: number; groups: FlakeGroup[
   }
   const areas = ends.length ? unmixCoverage(sum, bx, ends.map((e) => e.xyz)) : [];
   const area = areas.reduce((s, v) => s + v, 0);
+  // Groups on opposite sides of the base (JPEG's ringing puts a halo of the opposite hue round a
+  // speck) let the summed deviation be split into any two large areas that cancel: an area far
+  // beyond the pixels that differ from the base at all is that, so keep the farthest group alone.
+  if (ends.length > 1 && !x.oneColour && area > AREA_CAP * flakeCount) return measureFlake({ ...x, oneColour: true });
   const groups = ends
     .map((e, k) => ({ lab: e.lab, hex: labToHex(e.lab), share: area > 0 ? areas[k] / area : 0 }))
     .filter((g) => g.share > 0)

@@ -90,3 +90,13 @@ describe('fine flake at JPEG q75', () => {
     expect(covered(q75)).toBeGreaterThanOrEqual(0.9);
   });
 });
+
+// JPEG's ringing leaves a faint halo of the opposite hue round each speck; clustered as a second
+// "flake" on the far side of the base, it let the unmixing split the summed deviation into two
+// large areas that cancel (this photo read coverage 1.000). measureFlake caps the area at
+// AREA_CAP times the pixels that differ from the base and then keeps the farthest group.
+it('a halo of the opposite hue does not become a second flake that multiplies the area (blue 10 % on the blue base, q75)', async () => {
+  const r = await measureSpec('halo', { seed: 9004, base: BASES.blue, flake: { colours: [FLAKES.blue.colour], coverage: 0.1, sizes: [1, 3] }, blur: 0.6, format: 'jpeg75' });
+  expect(Math.abs(r.out.regions[0].flake.coverage - r.truth.coverage)).toBeLessThanOrEqual(0.04);
+  expect(r.error).toBeLessThanOrEqual(1.5);
+});
