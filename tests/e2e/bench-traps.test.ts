@@ -195,9 +195,13 @@ describe.runIf(browserAvailable())('browser: the bench without traps, on a phone
     const compare = page.getByRole('region', { name: 'Pour #1 against the target' });
     await compare.waitFor({ timeout: 20_000 });
     expect(await compare.getByText('Light not corrected: the figure mixes light and colour').count()).toBe(2);
+    // The page shows the comparison before the address names the new pour: wait for that too.
+    await page.waitForURL(/[?&]pour=/);
     const matchId = page.url().match(/\/matches\/([^/?#]+)/)![1]!;
     const pourId = new URL(page.url()).searchParams.get('pour')!;
-    const saved = await page.request.get(`${baseUrl()}/api/pours/${pourId}`).then((r) => r.json());
+    const res = await page.request.get(`${baseUrl()}/api/pours/${pourId}`);
+    expect(res.status()).toBe(200);
+    const saved = await res.json();
     expect(saved.recipe.map((l: any) => [l.unit, l.amount])).toEqual([['drops', 1.25], ['tsp', 0.25]]);
     expect(saved.batchCups).toBeCloseTo(1.5, 12);
     expect(saved.light).toEqual({ corrected: false, referenceCorrected: true });
