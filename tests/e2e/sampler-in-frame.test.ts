@@ -146,6 +146,7 @@ describe.runIf(browserAvailable())('browser: the sampler warns live; the batch f
       expect(pourText.match(/Flake \d+\.\d % ± \d+\.\d % \(target \d+\.\d % ± \d+\.\d %\)/g)).toHaveLength(2);
       await page.screenshot({ path: artifactPath(`batch-in-frame-result-${viewport.width}.png`), fullPage: true });
 
+      await page.waitForURL(/[?&]batch=/); // the router names the new batch just after the result shows
       const batchId = new URL(page.url()).searchParams.get('batch');
       expect(batchId).toBeTruthy();
       const stored = await api(`/api/batches/${batchId}`, { cookie: maker });

@@ -104,7 +104,7 @@ describe.runIf(browserAvailable())('browser: sign-off, a production batch and it
     expect(figures).toHaveLength(2);
     for (const f of figures) expect(f).toBeLessThanOrEqual(0.5); // the same pixels as the standard, within measuring noise
     await page.getByRole('figure', { name: /ΔE00 per zone across batches/ }).locator('svg[data-chart]').first().waitFor();
-    expect(page.url()).toMatch(/[?&]batch=/);
+    await page.waitForURL(/[?&]batch=/);
     await page.screenshot({ path: artifactPath('signoff-match-390.png'), fullPage: true });
     await page.setViewportSize({ width: 1280, height: 900 });
     await page.screenshot({ path: artifactPath('signoff-match-1280.png'), fullPage: true });
