@@ -72,8 +72,7 @@ export function measureFlake(x: FlakeInput): { area: number; groups: FlakeGroup[
   const samples: ColorSamples = { rgb: new Uint8Array(0), lab: fl, counts: new Uint32Array(flakeCount).fill(1), size: flakeCount, total: flakeCount, pixels: flakeCount };
   const all = clusterFlake(samples, coreCount > 0 ? core : new Uint8Array(flakeCount).fill(1), base);
   const far = (g: { lab: Lab }) => (g.lab.l - base.l) ** 2 + (g.lab.a - base.a) ** 2 + (g.lab.b - base.b) ** 2;
-  const clustered = x.oneColour && all.length > 1 ? [all.reduce((p, q) => (far(q) > far(p) ? q : p))] : all;
-  const ends = flakeEndmembers(clustered.map((g) => g.lab), fl, flakeIdx, xyz, bx);
+  const farthest = all.length > 1 ? [all.reduce((p, q) => (far(q) > far(p) ? q : p))] : all;
 
   const sum: Vec3 = [0, 0, 0];
   let counted = 0;
@@ -82,31 +81,36 @@ export function measureFlake(x: FlakeInput): { area: number; groups: FlakeGroup[
     counted++;
     sum[0] += xyz[j] - bx[0]; sum[1] += xyz[j + 1] - bx[1]; sum[2] += xyz[j + 2] - bx[2];
   }
-  const byLuma = x.lumaArea && ends.length === 1 ? areaByLuma(sum[1], counted, bx[1], ends[0].xyz[1]) : null;
-  if (byLuma !== null) return { area: byLuma, groups: [{ lab: ends[0].lab, hex: labToHex(ends[0].lab), share: 1 }] };
-  const luma = x.lumaArea && ends.length === 1 ? x.luma?.() : null;
-  if (luma) {
-    const flake = new Uint8Array(n);
-    for (let i = 0; i < n; i++) flake[i] = off[i] && !other[i] ? 1 : 0;
-    const area = areaByLumaCode({ ...luma, flake });
-    // Its colour: the base plus the region's mean deviation over the area (linear mixing), which
-    // the smear keeps, where the cores' own chroma has been spread away.
-    if (area !== null && area <= counted) {
-      const lab = xyzToLab([bx[0] + sum[0] / area, bx[1] + sum[1] / area, bx[2] + sum[2] / area]);
-      return { area, groups: [{ lab, hex: labToHex(lab), share: 1 }] };
+  const areaOf = (clustered: { lab: Lab }[]): { area: number; groups: FlakeGroup[] } => {
+    const ends = flakeEndmembers(clustered.map((g) => g.lab), fl, flakeIdx, xyz, bx);
+    const byLuma = x.lumaArea && ends.length === 1 ? areaByLuma(sum[1], counted, bx[1], ends[0].xyz[1]) : null;
+    if (byLuma !== null) return { area: byLuma, groups: [{ lab: ends[0].lab, hex: labToHex(ends[0].lab), share: 1 }] };
+    const luma = x.lumaArea && ends.length === 1 ? x.luma?.() : null;
+    if (luma) {
+      const flake = new Uint8Array(n);
+      for (let i = 0; i < n; i++) flake[i] = off[i] && !other[i] ? 1 : 0;
+      const area = areaByLumaCode({ ...luma, flake });
+      // Its colour: the base plus the region's mean deviation over the area (linear mixing), which
+      // the smear keeps, where the cores' own chroma has been spread away.
+      if (area !== null && area <= counted) {
+        const lab = xyzToLab([bx[0] + sum[0] / area, bx[1] + sum[1] / area, bx[2] + sum[2] / area]);
+        return { area, groups: [{ lab, hex: labToHex(lab), share: 1 }] };
+      }
     }
-  }
-  const areas = ends.length ? unmixCoverage(sum, bx, ends.map((e) => e.xyz)) : [];
-  const area = areas.reduce((s, v) => s + v, 0);
+    const areas = ends.length ? unmixCoverage(sum, bx, ends.map((e) => e.xyz)) : [];
+    const area = areas.reduce((t, v) => t + v, 0);
+    const groups = ends
+      .map((e, k) => ({ lab: e.lab, hex: labToHex(e.lab), share: area > 0 ? areas[k] / area : 0 }))
+      .filter((g) => g.share > 0)
+      .sort((g, h) => h.share - g.share);
+    return { area, groups };
+  };
+  if (x.oneColour) return areaOf(farthest);
+  const read = areaOf(all);
   // Groups on opposite sides of the base (JPEG's ringing puts a halo of the opposite hue round a
   // speck) let the summed deviation be split into any two large areas that cancel: an area far
   // beyond the pixels that differ from the base at all is that, so keep the farthest group alone.
-  if (ends.length > 1 && !x.oneColour && area > AREA_CAP * flakeCount) return measureFlake({ ...x, oneColour: true });
-  const groups = ends
-    .map((e, k) => ({ lab: e.lab, hex: labToHex(e.lab), share: area > 0 ? areas[k] / area : 0 }))
-    .filter((g) => g.share > 0)
-    .sort((g, h) => h.share - g.share);
-  return { area, groups };
+  return all.length > 1 && read.area > AREA_CAP * flakeCount ? areaOf(farthest) : read;
 }
 
 /** Whether the off pixels (Lab, interleaved) sit mostly on one side of the base, as flake does and noise does not. */
